@@ -33,6 +33,29 @@ public final class Chords {
         return Math.abs(w);
     }
 
+    /**
+     * The intervals of the line {@code line.height(p) = 0} that lie inside the region, as positions
+     * s = p·(ny, −nx) along the line direction, sorted. Each entry is {sIn, sOut}.
+     */
+    public static List<double[]> intervals(Region region, HalfPlane line) {
+        List<Crossing> xs = new ArrayList<>(crossings(region, line));
+        xs.sort((p, q) -> Double.compare(p.s(), q.s()));
+        List<double[]> out = new ArrayList<>();
+        int w = 0;
+        double start = 0;
+        for (Crossing x : xs) {
+            int before = w;
+            // walking along +s, a boundary going down (sign −1) is entered for a counter-clockwise outer contour
+            w -= x.sign();
+            if (before == 0 && w != 0) {
+                start = x.s();
+            } else if (before != 0 && w == 0 && x.s() > start) {
+                out.add(new double[] {start, x.s()});
+            }
+        }
+        return out;
+    }
+
     /** @return winding number of the region's boundary about p: non-zero inside */
     static int winding(Region region, Point2 p) {
         HalfPlane ray = HalfPlane.above(p.y());

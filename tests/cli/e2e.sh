@@ -1,0 +1,93 @@
+#!/usr/bin/env bash
+# End-to-end checks of the ./tensio launcher on the bundled demo and on bad input.
+# Prints one line per check and a closing "N passed, N failed" line; exit 1 when any check failed.
+set -u
+here=$(cd "$(dirname "$0")/../.." && pwd)
+tensio="$here/tensio"
+demo="$here/docs/examples/demo.tensio.json"
+work=$(mktemp -d)
+trap 'rm -rf "$work"' EXIT
+pass=0; fail=0
+ok()   { pass=$((pass+1)); echo "ok   - $1"; }
+bad()  { fail=$((fail+1)); echo "FAIL - $1"; [ -n "${2:-}" ] && sed 's/^/       /' "$2" | head -20; }
+
+# run NAME EXPECTED_EXIT -- ARGS...: stdout to $work/out, stderr to $work/err
+run() {
+  local name=$1 want=$2; shift 3
+  "$tensio" "$@" >"$work/out" 2>"$work/err"; local got=$?
+  if [ "$got" = "$want" ]; then return 0; fi
+  echo "       exit $got, wanted $want: tensio $*"; cat "$work/err" | head -5 | sed 's/^/       /'
+  return 1
+}
+
+py() { python3 -c "$1" "$work/out"; }
+
+# 1. the demo runs and prints readable results with the caution
+if run demo 0 -- demo && grep -q "von Mises" "$work/out" && grep -q "Caution" "$work/out" && grep -q "area A" "$work/out"; then
+  ok "demo prints properties, stresses and the caution"; else bad "demo" "$work/out"; fi
+
+# ids from the demo file
+read -r station case section < <(python3 - "$demo" <<'PY'
+import json,sys
+d=json.load(open(sys.argv[1]))
+st=next(iter(d["stations"])); s=d["stations"][st]
+print(st, next(iter(s["forces"])), s["section"])
+PY
+)
+
+# 2. properties JSON, all sections: stable keys
+if run props-json 0 -- properties "$demo" --format json && py '
+import json,sys
+d=json.load(open(sys.argv[1]))
+keys="section units area centroid Ixx Iyy Ixy I1 I2 principalAngleDeg rx ry Zx Zy J shearCentre Cw".split()
+secs=d["sections"]
+assert len(secs)>=2
+for s in secs:
+    for k in keys: assert k in s, k
+    assert set(s["centroid"])>={"x","y"}
+    assert s["area"]>0 and s["I1"]>=s["I2"]
+'; then ok "properties --format json lists every section with the stable keys"; else bad "properties json" "$work/out"; fi
+
+# 3. one section
+if run props-one 0 -- properties "$demo" --section "$section" --format json && py '
+import json,sys
+d=json.load(open(sys.argv[1])); assert d["section"]=="'"$section"'", d
+'; then ok "properties --section gives one object"; else bad "properties --section" "$work/out"; fi
+
+# 4. stress JSON at the centroid of the first station
+xy=$(python3 -c 'import json,sys; d=json.load(open(sys.argv[1])); print("%r,%r"%(d["centroid"]["x"],d["centroid"]["y"]))' "$work/out")
+if run stress-json 0 -- stress "$demo" --station "$station" --case "$case" --at "$xy" --format json && py '
+import json,sys,math
+d=json.load(open(sys.argv[1]))
+for k in "station case point sigmaZ tauZX tauZY sigma1 sigma2 sigma3 tauMax vonMises tresca shearMethod torsionMethod".split(): assert k in d, k
+assert d["station"]=="'"$station"'" and d["case"]=="'"$case"'"
+for k in "sigmaZ sigma1 sigma3 vonMises".split():
+    v=d[k]; assert v is None or math.isfinite(v)
+if d["sigma1"] is not None: assert d["sigma1"]>=d["sigma2"]>=d["sigma3"]
+'; then ok "stress --format json has the stable keys and ordered principal stresses"; else bad "stress json" "$work/out"; fi
+
+# 5. stress text
+if run stress-text 0 -- stress "$demo" --station "$station" --case "$case" --at "$xy" && grep -q "sigmaZ" "$work/out"; then
+  ok "stress text output"; else bad "stress text" "$work/out"; fi
+
+# 6-11. bad input: exit 2, one clear line naming the field, no stack trace
+badcase() { # name, file content or '', expected substring, args...
+  local name=$1 content=$2 want=$3; shift 3
+  if [ -n "$content" ]; then printf '%s' "$content" > "$work/bad.json"; fi
+  if run "$name" 2 -- "$@" && grep -q -- "$want" "$work/err" && ! grep -q "at org\.\|Exception in" "$work/err"; then
+    ok "bad input: $name"; else bad "bad input: $name (wanted '$want')" "$work/err"; fi
+}
+badcase missing-file '' "no such file" properties "$work/nope.json"
+badcase negative-radius '{"tensio":1,"materials":{"S":{"E":210000,"nu":0.3}},"sections":{"s":{"material":"S","profile":{"type":"CircleProfile","radius":-5}}},"stations":{},"combinations":{}}' "radius" properties "$work/bad.json"
+badcase malformed-json '{"tensio":1,"materials":' '$' properties "$work/bad.json"
+badcase point-outside '' "outside" stress "$demo" --station "$station" --case "$case" --at 1e6,1e6
+badcase unknown-station '' "nosuchstation" stress "$demo" --station nosuchstation --case "$case" --at 0,0
+badcase unknown-case '' "nosuchcase" stress "$demo" --station "$station" --case nosuchcase --at "$xy"
+badcase bad-point '' "--at" stress "$demo" --station "$station" --case "$case" --at abc
+badcase unknown-type '{"tensio":1,"materials":{"S":{"E":210000,"nu":0.3}},"sections":{"s":{"material":"S","profile":{"type":"BananaProfile"}}},"stations":{},"combinations":{}}' "BananaProfile" properties "$work/bad.json"
+
+# 12. usage error
+if run usage 2 -- properties && [ -s "$work/err" ]; then ok "usage error exits 2"; else bad "usage"; fi
+
+echo "e2e: $pass passed, $fail failed"
+[ "$fail" = 0 ]
