@@ -1,0 +1,19 @@
+package org.tensio.ui;
+
+import org.eclipse.ui.IPageLayout;
+import org.eclipse.ui.IPerspectiveFactory;
+import org.tensio.ui.views.SectionsView;
+
+/** The Tensio perspective ({@code org.tensio.ui.perspective}): the Sections view, no editor area. */
+public final class Perspective implements IPerspectiveFactory {
+
+    /** Perspective id as declared in plugin.xml. */
+    public static final String ID = "org.tensio.ui.perspective"; //$NON-NLS-1$
+
+    @Override
+    public void createInitialLayout(IPageLayout layout) {
+        layout.setEditorAreaVisible(false);
+        layout.addView(SectionsView.ID, IPageLayout.LEFT, 0.5f, layout.getEditorArea());
+        layout.getViewLayout(SectionsView.ID).setCloseable(false);
+    }
+}
