@@ -38,7 +38,10 @@ public record ArcSegment(Point2 centre, double a, double b, double startParam, d
         double size = Math.max(a, b);
         Point2 s = at(centre, a, b, startParam);
         Point2 e = at(centre, a, b, startParam + sweep);
-        if (s.distance(start) > TOLERANCE * size || e.distance(end) > TOLERANCE * size) {
+        // slack for rounding of coordinates far from the origin (centre and end points round separately)
+        double slack = 8 * Math.ulp(Math.max(Math.abs(centre.x()), Math.abs(centre.y())) + size);
+        double tol = TOLERANCE * size + slack;
+        if (s.distance(start) > tol || e.distance(end) > tol) {
             throw new IllegalArgumentException("arc end points " + start + " and " + end
                     + " do not lie on the arc about " + centre);
         }

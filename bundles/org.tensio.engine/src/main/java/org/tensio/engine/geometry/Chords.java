@@ -95,8 +95,8 @@ public final class Chords {
             if (roots.length > 0) {
                 return arc.atParam(roots[0]);
             }
-            // the crossing is at an end point (height exactly zero there)
-            return h0 == 0 ? arc.start() : arc.end();
+            // the root lies at (within 1e-14 rad of) an end of the piece: take the end nearer the line
+            return Math.abs(h0) <= Math.abs(h1) ? arc.start() : arc.end();
         }
         double u = h0 / (h0 - h1);
         return piece.pointAt(u);

@@ -2,7 +2,6 @@ package org.tensio.engine.geometry;
 
 import static org.junit.jupiter.api.Assertions.assertDoesNotThrow;
 
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 import org.tensio.engine.verification.Shapes;
 import org.tensio.engine.verification.Verify;
@@ -19,11 +18,6 @@ class ArcTranslationTest {
         Region moved = assertDoesNotThrow(() -> r.translated(1000, -2500));
         Verify.close(r.moments().area(), moved.moments().area(), 1e-12, "area unchanged by the move");
     }
-
-    @Disabled("bug: ArcSegment's constructor (ArcSegment.java:41) checks the end points against TOLERANCE·radius"
-            + " only; translated() (ArcSegment.java:128) rounds centre and end points separately, so an arc whose"
-            + " radius is below ~1e7 ulps of its coordinates (here r = 1.5e-7 at x = 128) throws"
-            + " IllegalArgumentException when moved")
     @Test
     void tinyFilletFarFromTheOrigin() {
         Region r = Shapes.iSection(1, 0.6, 0.05, 0.05, 1.5e-7);

@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.List;
 
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 import org.tensio.engine.verification.Verify;
 
@@ -31,9 +30,6 @@ class ChordsNearArcJointTest {
         double y = 1e-11;
         Verify.close(2 * Math.sqrt(1600 - y * y), Chords.width(DISC, HalfPlane.above(y)), 1e-12, "width at y = 1e-11");
     }
-
-    @Disabled("bug: Chords.crossingPoint (Chords.java:99) picks the wrong end of a monotone arc piece when the "
-            + "line crosses it within 1e-14 rad of an end; width of a disc at y = 1e-13 comes back as r, not 2r")
     @Test
     void lineJustAboveTheDiameterOfADisc() {
         for (double y : new double[] {1e-16, 40 * Math.sin(Math.PI), 1e-13, -1e-13}) {
@@ -46,9 +42,6 @@ class ChordsNearArcJointTest {
         Region ring = new Region(Contour.circle(new Point2(0, 0), 40), List.of(Contour.circle(new Point2(0, 0), 30)));
         Verify.close(20, Chords.width(ring, HalfPlane.above(1e-13)), 1e-12, "ring width 2(ro − ri)");
     }
-
-    @Disabled("bug: same cause as above (Chords.java:99): Region.locate, through the winding count, reports a point"
-            + " at (10, 1e-13) of a disc of radius 40 centred at the origin as OUTSIDE")
     @Test
     void pointJustAboveTheDiameterIsInside() {
         for (double y : new double[] {1e-16, 40 * Math.sin(Math.PI), 1e-13, -1e-13}) {

@@ -1,6 +1,5 @@
 package org.tensio.engine.stress;
 
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 import org.tensio.engine.geometry.Point2;
 import org.tensio.engine.loads.InternalForces;
@@ -33,9 +32,6 @@ class CircleNearDiameterStressTest {
         PointStress ps = PointStressOp.evaluate(s, p, new InternalForces(0, 0, V, 0, 0, 0), new Point2(10, 0), "st", "V");
         Verify.close(expectedTau(0), ps.total().tauZY(), 1e-12, "τ = V·r²/(3I) on the diameter");
     }
-
-    @Disabled("bug: Chords.crossingPoint (Chords.java:99): the horizontal cut at y = 20·sin(π) ≈ 2.4e-15 gets half the"
-            + " true width, so τzy doubles; at (10, 1e-13) PointStressOp.evaluate even throws 'lies outside section'")
     @Test
     void roundingNoiseOffTheDiameter() {
         Section s = Shapes.section(new CircleProfile(R));
