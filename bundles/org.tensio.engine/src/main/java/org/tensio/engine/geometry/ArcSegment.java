@@ -105,6 +105,29 @@ public record ArcSegment(Point2 centre, double a, double b, double startParam, d
         return startParam + sweep;
     }
 
+    /** @return true when parameter t (mod 2π) lies within the closed sweep */
+    public boolean inSweep(double t) {
+        double u = Angles.offset(t, startParam, sweep);
+        double eps = 1e-12;
+        return u <= Math.abs(sweep) + eps || u >= 2 * Math.PI - eps;
+    }
+
+    /** @return t expressed as startParam + signed offset in the sweep direction (mod 2π) */
+    public double unwrap(double t) {
+        return Angles.unwrap(t, startParam, sweep);
+    }
+
+    /** @return the parameter of the point on the ellipse in the direction of p from the centre (scaled) */
+    public double paramOf(Point2 p) {
+        return Math.atan2((p.y() - centre.y()) / b, (p.x() - centre.x()) / a);
+    }
+
+    /** @return the tangent direction (not normalised) at parameter t, in the direction of travel */
+    public Point2 tangentAt(double t) {
+        double sg = Math.signum(sweep);
+        return new Point2(-a * Math.sin(t) * sg, b * Math.cos(t) * sg);
+    }
+
     /** @return the point at parameter t (not limited to the sweep) */
     public Point2 atParam(double t) {
         return at(centre, a, b, t);
