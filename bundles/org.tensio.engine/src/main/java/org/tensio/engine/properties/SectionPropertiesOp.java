@@ -74,7 +74,10 @@ public final class SectionPropertiesOp {
             angle += 180;
         }
         Bounds b = section.bounds();
-        double xc = xcl + ox, yc = ycl + oy;
+        // round-off below 1e-12 of the section's size or stiffness is reported as exactly zero
+        double size = b.diagonal();
+        double xc = snap(xcl + ox, size), yc = snap(ycl + oy, size);
+        ixy = snap(ixy, Math.sqrt(Math.abs(ixx * iyy)));
         double plasticY = plasticAxis(geo.area(), true);
         double plasticX = plasticAxis(geo.area(), false);
         double zx = plasticModulus(plasticY, true);
@@ -83,8 +86,13 @@ public final class SectionPropertiesOp {
         return new SectionProperties(section.name(), section.referenceMaterial().name(), section.isComposite(), a,
                 new Point2(xc, yc), ixx, iyy, ixy, i1, i2, angle, Math.sqrt(ixx / a), Math.sqrt(iyy / a),
                 ixx / (b.maxY() - yc), ixx / (yc - b.minY()), iyy / (b.maxX() - xc), iyy / (xc - b.minX()), zx, zy,
-                plasticY + oy, plasticX + ox, tor == null ? null : tor.j, tor == null ? null : tor.centre,
+                snap(plasticY + oy, size), snap(plasticX + ox, size), tor == null ? null : tor.j, tor == null ? null : tor.centre,
                 tor == null ? null : 0.0, tor == null ? null : tor.source, b.minX(), b.minY(), b.maxX(), b.maxY());
+    }
+
+    /** @return 0 when |v| is below 1e-12 of {@code scale}, else v */
+    static double snap(double v, double scale) {
+        return Math.abs(v) < 1e-12 * scale ? 0.0 : v;
     }
 
     /** Bisection for the equal-area axis, local frame; {@code horizontal} for the axis parallel to x. */

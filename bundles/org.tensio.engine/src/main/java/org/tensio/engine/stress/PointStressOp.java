@@ -105,6 +105,7 @@ public final class PointStressOp {
                     + "' needs the finite-element torsion solution, not computed in this version: shear and"
                     + " equivalent stresses are not reported (sigmaZ is complete)");
         }
+        snapRoundOff(contrib);
         StressComponents total = StressComponents.ZERO;
         for (StressComponents c : contrib.values()) {
             total = total.plus(c);
@@ -115,6 +116,20 @@ public final class PointStressOp {
         return new PointStress(stationId, caseId, point, partIndex, part.material().name(), forces, total.sigmaZ(),
                 complete ? total : null, complete ? PrincipalStresses.of(total) : null, contrib, cuts,
                 SHEAR_ELEMENTARY, torsionMethod, List.copyOf(warnings));
+    }
+
+    /** Contributions below 1e-12 of the largest one at the point are round-off: report them as zero. */
+    private static void snapRoundOff(Map<ForceComponent, StressComponents> contrib) {
+        double max = 0;
+        for (StressComponents c : contrib.values()) {
+            max = Math.max(max, Math.max(Math.abs(c.sigmaZ()), Math.max(Math.abs(c.tauZX()), Math.abs(c.tauZY()))));
+        }
+        double eps = 1e-12 * max;
+        for (Map.Entry<ForceComponent, StressComponents> e : contrib.entrySet()) {
+            StressComponents c = e.getValue();
+            e.setValue(new StressComponents(Math.abs(c.sigmaZ()) < eps ? 0 : c.sigmaZ(),
+                    Math.abs(c.tauZX()) < eps ? 0 : c.tauZX(), Math.abs(c.tauZY()) < eps ? 0 : c.tauZY()));
+        }
     }
 
     /**
