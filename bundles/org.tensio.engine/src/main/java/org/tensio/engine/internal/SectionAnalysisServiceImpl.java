@@ -2,12 +2,20 @@ package org.tensio.engine.internal;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.Map;
 
 import org.osgi.service.component.annotations.Component;
+import org.tensio.engine.fem.FiniteElementSolution;
+import org.tensio.engine.fem.SectionSolver;
 import org.tensio.engine.geometry.Point2;
 import org.tensio.engine.io.ProjectFormatException;
 import org.tensio.engine.io.ProjectReader;
+import org.tensio.engine.linalg.ProgressMonitor;
 import org.tensio.engine.loads.InternalForces;
+import org.tensio.engine.mesh.Mesh;
+import org.tensio.engine.mesh.MeshGenerator;
+import org.tensio.engine.mesh.MeshOptions;
 import org.tensio.engine.project.Project;
 import org.tensio.engine.project.Station;
 import org.tensio.engine.properties.SectionProperties;
@@ -16,10 +24,29 @@ import org.tensio.engine.section.Section;
 import org.tensio.engine.service.SectionAnalysisService;
 import org.tensio.engine.stress.PointStress;
 import org.tensio.engine.stress.PointStressOp;
+import org.tensio.engine.stress.ShearMethod;
 
-/** The engine service: stateless, thread-safe. */
+/**
+ * The engine service. Thread-safe: the only state is a small LRU cache of finite-element solutions keyed by
+ * section instance (identity), so a project read once is solved once.
+ */
 @Component(service = SectionAnalysisService.class)
 public final class SectionAnalysisServiceImpl implements SectionAnalysisService {
+
+    /** Solutions kept; each holds its mesh and fields (a few MB for the default mesh). */
+    private static final int CACHE_SIZE = 32;
+
+    /** Torsion source when the finite-element solution failed. */
+    public static final String FAILED = "finiteElementFailed";
+
+    private final Map<Section, FiniteElementSolution> cache = new LinkedHashMap<>(16, 0.75f, true) {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        protected boolean removeEldestEntry(Map.Entry<Section, FiniteElementSolution> eldest) {
+            return size() > CACHE_SIZE;
+        }
+    };
 
     @Override
     public Project readProject(Path file) throws ProjectFormatException, IOException {
@@ -33,14 +60,59 @@ public final class SectionAnalysisServiceImpl implements SectionAnalysisService 
 
     @Override
     public SectionProperties properties(Section section) {
-        return SectionPropertiesOp.compute(section);
+        SectionProperties p = SectionPropertiesOp.compute(section);
+        if (p.torsionClosedForm()) {
+            return p;
+        }
+        try {
+            FiniteElementSolution f = solution(section);
+            return p.withTorsion(f.jWarping(), f.shearCentre(), f.cw(), SectionProperties.FINITE_ELEMENT);
+        } catch (RuntimeException e) {
+            return p.withTorsion(null, null, null, FAILED);
+        }
+    }
+
+    @Override
+    public FiniteElementSolution solution(Section section) {
+        synchronized (cache) {
+            for (Map.Entry<Section, FiniteElementSolution> e : cache.entrySet()) {
+                if (e.getKey() == section) {
+                    return cache.get(e.getKey());
+                }
+            }
+        }
+        FiniteElementSolution f = solution(section, MeshOptions.defaults(), null);
+        synchronized (cache) {
+            cache.put(section, f);
+        }
+        return f;
+    }
+
+    @Override
+    public FiniteElementSolution solution(Section section, MeshOptions options, ProgressMonitor monitor) {
+        Mesh mesh = MeshGenerator.generate(section, options, monitor);
+        return SectionSolver.solve(section, mesh, monitor);
     }
 
     @Override
     public PointStress stressAt(Project project, String stationId, String caseId, Point2 point) {
+        return stressAt(project, stationId, caseId, point, ShearMethod.finiteElement);
+    }
+
+    @Override
+    public PointStress stressAt(Project project, String stationId, String caseId, Point2 point, ShearMethod shearMethod) {
         Station st = project.station(stationId);
         InternalForces f = project.forces(stationId, caseId);
         Section s = project.section(st.sectionId());
-        return PointStressOp.evaluate(s, properties(s), f, point, stationId, caseId);
+        SectionProperties props = properties(s);
+        FiniteElementSolution fe = props.torsionSource() != null && props.torsionSource().equals(FAILED) ? null
+                : needsFields(props, f, shearMethod) ? solution(s) : null;
+        return PointStressOp.evaluate(s, props, fe, shearMethod, f, point, stationId, caseId);
+    }
+
+    private static boolean needsFields(SectionProperties p, InternalForces f, ShearMethod m) {
+        boolean shear = m == ShearMethod.finiteElement && (f.vx() != 0 || f.vy() != 0);
+        boolean torsion = !p.torsionClosedForm() && f.t() != 0;
+        return shear || torsion;
     }
 }

@@ -52,4 +52,23 @@ public record SectionProperties(String section, String referenceMaterial, boolea
         double rx, double ry, double sxTop, double sxBottom, double syRight, double syLeft, double zx, double zy,
         double plasticAxisY, double plasticAxisX, Double j, Point2 shearCentre, Double cw, String torsionSource,
         double minX, double minY, double maxX, double maxY) {
+
+    /** {@link #torsionSource()} of the closed form for a solid circle. */
+    public static final String CLOSED_FORM_CIRCLE = "closedFormCircle";
+    /** {@link #torsionSource()} of the closed form for a circular tube. */
+    public static final String CLOSED_FORM_TUBE = "closedFormTube";
+    /** {@link #torsionSource()} of the finite-element solution. */
+    public static final String FINITE_ELEMENT = "finiteElement";
+
+    /** @return true when J and the shear centre come from a closed form (circle or tube) */
+    public boolean torsionClosedForm() {
+        return CLOSED_FORM_CIRCLE.equals(torsionSource) || CLOSED_FORM_TUBE.equals(torsionSource);
+    }
+
+    /** @return a copy with the torsion constant, shear centre, warping constant and their source replaced */
+    public SectionProperties withTorsion(Double newJ, Point2 newShearCentre, Double newCw, String source) {
+        return new SectionProperties(section, referenceMaterial, composite, area, centroid, ixx, iyy, ixy, i1, i2,
+                principalAngleDeg, rx, ry, sxTop, sxBottom, syRight, syLeft, zx, zy, plasticAxisY, plasticAxisX, newJ,
+                newShearCentre, newCw, source, minX, minY, maxX, maxY);
+    }
 }

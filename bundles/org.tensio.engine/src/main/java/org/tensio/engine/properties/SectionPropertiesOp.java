@@ -150,12 +150,12 @@ public final class SectionPropertiesOp {
             return null;
         }
         if (type.equals("CircleProfile")) {
-            return new Torsion(Math.PI * Math.pow(r, 4) / 2, new Point2(xc, yc), "closedFormCircle");
+            return new Torsion(Math.PI * Math.pow(r, 4) / 2, new Point2(xc, yc), SectionProperties.CLOSED_FORM_CIRCLE);
         }
         Double t = p.profile().parameters().get("wallThickness");
         if (type.equals("CircleHollowProfile") && t != null) {
             double ri = r - t;
-            return new Torsion(Math.PI * (Math.pow(r, 4) - Math.pow(ri, 4)) / 2, new Point2(xc, yc), "closedFormTube");
+            return new Torsion(Math.PI * (Math.pow(r, 4) - Math.pow(ri, 4)) / 2, new Point2(xc, yc), SectionProperties.CLOSED_FORM_TUBE);
         }
         return null;
     }

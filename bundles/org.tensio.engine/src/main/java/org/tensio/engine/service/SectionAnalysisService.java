@@ -2,12 +2,16 @@ package org.tensio.engine.service;
 
 import java.nio.file.Path;
 
+import org.tensio.engine.fem.FiniteElementSolution;
 import org.tensio.engine.geometry.Point2;
+import org.tensio.engine.linalg.ProgressMonitor;
+import org.tensio.engine.mesh.MeshOptions;
 import org.tensio.engine.io.ProjectFormatException;
 import org.tensio.engine.project.Project;
 import org.tensio.engine.properties.SectionProperties;
 import org.tensio.engine.section.Section;
 import org.tensio.engine.stress.PointStress;
+import org.tensio.engine.stress.ShearMethod;
 
 /**
  * The engine's entry point for user interfaces and tools, registered as an OSGi DS service and also
@@ -33,8 +37,26 @@ public interface SectionAnalysisService {
      */
     Project parseProject(String json, String sourceName) throws ProjectFormatException;
 
-    /** @return the exact properties of {@code section} */
+    /**
+     * @return the exact properties of {@code section}; J, shear centre and Cw from the closed forms for circles
+     *         and tubes, from the finite-element solution on the default mesh for every other section ({@code null}
+     *         with {@code torsionSource} {@code "finiteElementFailed"} if that solution failed)
+     */
     SectionProperties properties(Section section);
+
+    /**
+     * The finite-element torsion and shear solution of {@code section} on the default mesh, computed once per
+     * section instance and kept in a small cache.
+     */
+    FiniteElementSolution solution(Section section);
+
+    /**
+     * The finite-element solution on a mesh of the given options (not cached).
+     *
+     * @param monitor progress and cancellation, may be null
+     * @throws java.util.concurrent.CancellationException when the monitor cancels
+     */
+    FiniteElementSolution solution(Section section, MeshOptions options, ProgressMonitor monitor);
 
     /**
      * The stress state at a point of the section at a station, for a load case or a combination.
@@ -44,6 +66,13 @@ public interface SectionAnalysisService {
      *                                  outside the section
      */
     PointStress stressAt(Project project, String stationId, String caseId, Point2 point);
+
+    /**
+     * As {@link #stressAt(Project, String, String, Point2)} with the shear stresses from Vx, Vy by the given
+     * method (the finite-element shear functions are the default; torsion always uses the finite-element
+     * warping function for non-circular sections).
+     */
+    PointStress stressAt(Project project, String stationId, String caseId, Point2 point, ShearMethod shearMethod);
 
     /** @return a new instance for use outside OSGi */
     static SectionAnalysisService create() {

@@ -5,6 +5,8 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 
+import org.tensio.engine.fem.FiniteElementSolution;
+import org.tensio.engine.fem.UnitShear;
 import org.tensio.engine.geometry.Chords;
 import org.tensio.engine.geometry.HalfPlane;
 import org.tensio.engine.geometry.Moments;
@@ -12,6 +14,7 @@ import org.tensio.engine.geometry.Point2;
 import org.tensio.engine.geometry.Region;
 import org.tensio.engine.loads.ForceComponent;
 import org.tensio.engine.loads.InternalForces;
+import org.tensio.engine.mesh.Singularity;
 import org.tensio.engine.properties.SectionProperties;
 import org.tensio.engine.section.Section;
 import org.tensio.engine.section.SectionPart;
@@ -43,6 +46,12 @@ public final class PointStressOp {
 
     /** Method name: elementary shear flow on straight cuts. */
     public static final String SHEAR_ELEMENTARY = "elementary";
+    /** Method name: shear functions on the finite-element mesh. */
+    public static final String SHEAR_FINITE_ELEMENT = "finiteElement";
+    /** Method name: warping function on the finite-element mesh. */
+    public static final String TORSION_FINITE_ELEMENT = "finiteElement";
+    /** Points closer than this fraction of the section diagonal to a sharp re-entrant corner get a warning. */
+    public static final double SINGULAR_RADIUS = 0.02;
     /** Method name: exact closed form for a circle or tube. */
     public static final String TORSION_EXACT_CIRCULAR = "exactCircular";
     /** Method name: torsion not needed because T = 0. */
@@ -65,6 +74,18 @@ public final class PointStressOp {
      */
     public static PointStress evaluate(Section section, SectionProperties props, InternalForces forces, Point2 point,
             String stationId, String caseId) {
+        return evaluate(section, props, null, ShearMethod.elementary, forces, point, stationId, caseId);
+    }
+
+    /**
+     * As {@link #evaluate(Section, SectionProperties, InternalForces, Point2, String, String)}, with torsion
+     * (any section) and, when {@code shearMethod} is {@link ShearMethod#finiteElement}, shear (homogeneous
+     * sections) from the finite-element fields {@code fe}; {@code fe} may be null (elementary methods and
+     * closed forms only).
+     */
+    public static PointStress evaluate(Section section, SectionProperties props, FiniteElementSolution fe,
+            ShearMethod shearMethod, InternalForces forces, Point2 point, String stationId, String caseId) {
+        List<String> warnings = new ArrayList<>();
         int partIndex = locate(section, point);
         SectionPart part = section.parts().get(partIndex);
         double n = part.material().e() / section.referenceMaterial().e();
@@ -79,22 +100,43 @@ public final class PointStressOp {
         contrib.put(ForceComponent.MY, new StressComponents(n * forces.my() * (ixy * by - ixx * bx) / d, 0, 0));
 
         ShearCuts cuts = cuts(section, point, xc, yc);
-        double th = cuts.widthHorizontal(), tv = cuts.widthVertical();
-        double vxZy = th > 0 ? (ixx * cuts.qyHorizontal() - ixy * cuts.qxHorizontal()) / (d * th) : 0;
-        double vyZy = th > 0 ? (iyy * cuts.qxHorizontal() - ixy * cuts.qyHorizontal()) / (d * th) : 0;
-        double vxZx = tv > 0 ? (ixx * cuts.qyVertical() - ixy * cuts.qxVertical()) / (d * tv) : 0;
-        double vyZx = tv > 0 ? (iyy * cuts.qxVertical() - ixy * cuts.qyVertical()) / (d * tv) : 0;
-        contrib.put(ForceComponent.VX, new StressComponents(0, forces.vx() * vxZx, forces.vx() * vxZy));
-        contrib.put(ForceComponent.VY, new StressComponents(0, forces.vy() * vyZx, forces.vy() * vyZy));
+        UnitShear[] unit = null;
+        if (fe != null && (forces.t() != 0 || forces.vx() != 0 || forces.vy() != 0)) {
+            unit = fe.unitStresses(point, false);
+        }
+        String shear;
+        if (shearMethod == ShearMethod.finiteElement && fe != null && fe.hasShearFields()) {
+            UnitShear[] u = unit != null ? unit : fe.unitStresses(point, false);
+            contrib.put(ForceComponent.VX, new StressComponents(0, forces.vx() * u[1].tauZX(), forces.vx() * u[1].tauZY()));
+            contrib.put(ForceComponent.VY, new StressComponents(0, forces.vy() * u[2].tauZX(), forces.vy() * u[2].tauZY()));
+            shear = SHEAR_FINITE_ELEMENT;
+        } else {
+            double th = cuts.widthHorizontal(), tv = cuts.widthVertical();
+            double vxZy = th > 0 ? (ixx * cuts.qyHorizontal() - ixy * cuts.qxHorizontal()) / (d * th) : 0;
+            double vyZy = th > 0 ? (iyy * cuts.qxHorizontal() - ixy * cuts.qyHorizontal()) / (d * th) : 0;
+            double vxZx = tv > 0 ? (ixx * cuts.qyVertical() - ixy * cuts.qxVertical()) / (d * tv) : 0;
+            double vyZx = tv > 0 ? (iyy * cuts.qxVertical() - ixy * cuts.qyVertical()) / (d * tv) : 0;
+            contrib.put(ForceComponent.VX, new StressComponents(0, forces.vx() * vxZx, forces.vx() * vxZy));
+            contrib.put(ForceComponent.VY, new StressComponents(0, forces.vy() * vyZx, forces.vy() * vyZy));
+            shear = SHEAR_ELEMENTARY;
+            if (shearMethod == ShearMethod.finiteElement && (forces.vx() != 0 || forces.vy() != 0)) {
+                warnings.add(fe == null ? "no finite-element solution: shear by the elementary method"
+                        : "composite section: shear by the elementary method (shear functions are computed for"
+                                + " homogeneous sections only)");
+            }
+        }
 
-        List<String> warnings = new ArrayList<>();
         String torsionMethod;
         boolean complete = true;
-        if (props.j() != null && props.shearCentre() != null) {
+        if (props.torsionClosedForm()) {
             double j = props.j();
             double rx = point.x() - props.shearCentre().x(), ry = point.y() - props.shearCentre().y();
             contrib.put(ForceComponent.T, new StressComponents(0, -forces.t() * ry / j, forces.t() * rx / j));
             torsionMethod = forces.t() == 0 ? TORSION_NOT_REQUIRED : TORSION_EXACT_CIRCULAR;
+        } else if (fe != null) {
+            UnitShear u = unit != null ? unit[0] : fe.unitStresses(point, false)[0];
+            contrib.put(ForceComponent.T, new StressComponents(0, forces.t() * u.tauZX(), forces.t() * u.tauZY()));
+            torsionMethod = forces.t() == 0 ? TORSION_NOT_REQUIRED : TORSION_FINITE_ELEMENT;
         } else if (forces.t() == 0) {
             contrib.put(ForceComponent.T, StressComponents.ZERO);
             torsionMethod = TORSION_NOT_REQUIRED;
@@ -110,25 +152,41 @@ public final class PointStressOp {
         for (StressComponents c : contrib.values()) {
             total = total.plus(c);
         }
-        if (section.parts().size() > 1 && (forces.vx() != 0 || forces.vy() != 0)) {
+        if (shear.equals(SHEAR_ELEMENTARY) && section.parts().size() > 1 && (forces.vx() != 0 || forces.vy() != 0)) {
             warnings.add("elementary shear on a composite section assumes a uniform τ across each cut");
+        }
+        if (fe != null && (forces.t() != 0 || forces.vx() != 0 || forces.vy() != 0)) {
+            double near = SINGULAR_RADIUS * section.bounds().diagonal();
+            for (Singularity sg : fe.mesh().singularities()) {
+                if (Math.hypot(sg.x() - point.x(), sg.y() - point.y()) <= near) {
+                    warnings.add(String.format(java.util.Locale.ROOT, "the point is within %.3g of a sharp re-entrant"
+                            + " corner at (%.6g, %.6g) (interior angle %.1f°): the elastic shear stress there is"
+                            + " singular and grows with mesh refinement; model the fillet instead of trusting this value",
+                            near, sg.x(), sg.y(), sg.interiorAngleDeg()));
+                    break;
+                }
+            }
         }
         return new PointStress(stationId, caseId, point, partIndex, part.material().name(), forces, total.sigmaZ(),
                 complete ? total : null, complete ? PrincipalStresses.of(total) : null, contrib, cuts,
-                SHEAR_ELEMENTARY, torsionMethod, List.copyOf(warnings));
+                shear, torsionMethod, List.copyOf(warnings));
     }
 
-    /** Contributions below 1e-12 of the largest one at the point are round-off: report them as zero. */
+    /**
+     * Contributions below 1e-12 of the largest of their kind at the point (normal or shear) are round-off:
+     * report them as zero.
+     */
     private static void snapRoundOff(Map<ForceComponent, StressComponents> contrib) {
-        double max = 0;
+        double maxS = 0, maxT = 0;
         for (StressComponents c : contrib.values()) {
-            max = Math.max(max, Math.max(Math.abs(c.sigmaZ()), Math.max(Math.abs(c.tauZX()), Math.abs(c.tauZY()))));
+            maxS = Math.max(maxS, Math.abs(c.sigmaZ()));
+            maxT = Math.max(maxT, Math.max(Math.abs(c.tauZX()), Math.abs(c.tauZY())));
         }
-        double eps = 1e-12 * max;
+        double es = 1e-12 * maxS, et = 1e-12 * maxT;
         for (Map.Entry<ForceComponent, StressComponents> e : contrib.entrySet()) {
             StressComponents c = e.getValue();
-            e.setValue(new StressComponents(Math.abs(c.sigmaZ()) < eps ? 0 : c.sigmaZ(),
-                    Math.abs(c.tauZX()) < eps ? 0 : c.tauZX(), Math.abs(c.tauZY()) < eps ? 0 : c.tauZY()));
+            e.setValue(new StressComponents(Math.abs(c.sigmaZ()) < es ? 0 : c.sigmaZ(),
+                    Math.abs(c.tauZX()) < et ? 0 : c.tauZX(), Math.abs(c.tauZY()) < et ? 0 : c.tauZY()));
         }
     }
 
