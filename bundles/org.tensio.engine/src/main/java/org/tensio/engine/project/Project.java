@@ -6,6 +6,7 @@ import java.util.Map;
 
 import org.tensio.engine.loads.InternalForces;
 import org.tensio.engine.section.Material;
+import org.tensio.engine.section.MaterialLimits;
 import org.tensio.engine.section.Section;
 import org.tensio.engine.units.UnitSystem;
 
@@ -18,13 +19,22 @@ import org.tensio.engine.units.UnitSystem;
  * @param sections     sections by id
  * @param stations     stations by id
  * @param combinations combinations by id
+ * @param limits       what each material is checked against, by material id (materials without an entry are
+ *                     not checked)
  * @since 0.1
  */
 public record Project(UnitSystem units, Map<String, Material> materials, Map<String, Section> sections,
-        Map<String, Station> stations, Map<String, Combination> combinations) {
+        Map<String, Station> stations, Map<String, Combination> combinations, Map<String, MaterialLimits> limits) {
+
+    /** A project without check limits. */
+    public Project(UnitSystem units, Map<String, Material> materials, Map<String, Section> sections,
+            Map<String, Station> stations, Map<String, Combination> combinations) {
+        this(units, materials, sections, stations, combinations, Map.of());
+    }
 
     /** Copies the maps. */
     public Project {
+        limits = Collections.unmodifiableMap(new LinkedHashMap<>(limits));
         materials = Collections.unmodifiableMap(new LinkedHashMap<>(materials));
         sections = Collections.unmodifiableMap(new LinkedHashMap<>(sections));
         stations = Collections.unmodifiableMap(new LinkedHashMap<>(stations));
