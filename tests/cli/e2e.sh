@@ -70,6 +70,38 @@ if d["sigma1"] is not None: assert d["sigma1"]>=d["sigma2"]>=d["sigma3"]
 if run stress-text 0 -- stress "$demo" --station "$station" --case "$case" --at "$xy" && grep -q "sigmaZ" "$work/out"; then
   ok "stress text output"; else bad "stress text" "$work/out"; fi
 
+# 5b. finite-element torsion and shear on a non-circular section: J, shear centre and Cw for every section,
+#     and a stress point on the I beam under torsion with both shear methods
+cat > "$work/fe.json" <<'JSON'
+{"tensio": 1, "units": {"length": "mm", "force": "N"},
+ "materials": {"S": {"E": 210000, "nu": 0.3, "fy": 355}},
+ "sections": {"bar": {"material": "S", "profile": {"type": "RectangleProfile", "xDim": 60, "yDim": 20}}},
+ "stations": {"A": {"section": "bar", "forces": {"T1": {"T": 1e5, "Vy": 1000}}}},
+ "combinations": {}}
+JSON
+if run fe-props 0 -- properties "$work/fe.json" --format json && py '
+import json,sys
+d=json.load(open(sys.argv[1]))
+# 60 x 20 rectangle: exact J = 126392 mm^4 (series, Timoshenko & Goodier, Theory of Elasticity, §109), within 0.1 %
+j=d["J"]; assert d["torsionMethod"]=="finiteElement", d["torsionMethod"]
+assert abs(j-126392.)/126392. < 1e-3, j
+assert d["shearCentre"] is not None and d["Cw"] is not None
+fe=d["finiteElement"]; assert fe["JStressFunction"] <= j and fe["JBracket"] < 1e-3
+'; then ok "properties: finite-element J, shear centre and Cw for a rectangle"; else bad "fe properties" "$work/out"; fi
+if run fe-stress 0 -- stress "$work/fe.json" --station A --case T1 --at 0,10 --format json && py '
+import json,sys
+d=json.load(open(sys.argv[1]))
+assert d["torsionMethod"]=="finiteElement" and d["shearMethod"]=="finiteElement"
+assert d["tauZX"] is not None and d["vonMises"] is not None
+assert d["tauZX"] < 0   # positive T: tau_zx = -T.y/... on the top face (y > 0)
+'; then ok "stress: finite-element torsion and shear at a rectangle's top fibre"; else bad "fe stress" "$work/out"; fi
+if run fe-elem 0 -- stress "$work/fe.json" --station A --case T1 --at 0,0 --shear-method elementary --format json && py '
+import json,sys
+d=json.load(open(sys.argv[1]))
+assert d["shearMethod"]=="elementary"
+c=d["contributions"]["Vy"]["tauZY"]; assert abs(c-1.5*1000/1200)<1e-9, c   # 1.5 V/A
+'; then ok "stress --shear-method elementary gives 1.5 V/A at a rectangle's centre"; else bad "elementary" "$work/out"; fi
+
 # 6-11. bad input: exit 2, one clear line naming the field, no stack trace
 badcase() { # name, file content or '', expected substring, args...
   local name=$1 content=$2 want=$3; shift 3

@@ -2,8 +2,10 @@ package org.tensio.cli;
 
 import java.util.Map;
 
+import org.tensio.engine.fem.FiniteElementSolution;
 import org.tensio.engine.geometry.Point2;
 import org.tensio.engine.loads.ForceComponent;
+import org.tensio.engine.mesh.Singularity;
 import org.tensio.engine.properties.SectionProperties;
 import org.tensio.engine.stress.PointStress;
 import org.tensio.engine.stress.PrincipalStresses;
@@ -40,6 +42,72 @@ final class Json {
         JsonObject o = new JsonObject();
         o.addProperty("x", p.x());
         o.addProperty("y", p.y());
+        return o;
+    }
+
+    static JsonObject properties(SectionProperties p, TorsionReport t, UnitSystem u) {
+        JsonObject o = properties(p, u);
+        o.add("finiteElement", finiteElement(t));
+        return o;
+    }
+
+    /** The finite-element block: J bracket, shear coefficients, mesh, singular corners, residuals, convergence. */
+    static JsonObject finiteElement(TorsionReport t) {
+        JsonObject o = new JsonObject();
+        if (t.solution() == null) {
+            o.addProperty("error", t.error());
+            return o;
+        }
+        FiniteElementSolution f = t.solution();
+        o.addProperty("JWarping", f.jWarping());
+        o.addProperty("JStressFunction", f.jPrandtl());
+        o.addProperty("JBracket", f.jBracket());
+        o.add("shearCentre", point(f.shearCentre()));
+        o.addProperty("Cw", f.cw());
+        var k = t.shearCoefficients();
+        if (k != null) {
+            JsonObject sc = new JsonObject();
+            sc.addProperty("kx", k.get(0));
+            sc.addProperty("ky", k.get(1));
+            sc.addProperty("coupling", f.shearAreas()[2]);
+            sc.addProperty("method", "energy");
+            o.add("shearCoefficients", sc);
+        } else {
+            o.add("shearCoefficients", JsonNull.INSTANCE);
+        }
+        o.addProperty("peakTorsionStressPerUnitTorque", f.peakUnitTorsionStress());
+        o.add("peakTorsionStressAt", point(f.peakUnitTorsionAt()));
+        JsonObject m = new JsonObject();
+        m.addProperty("elements", f.mesh().elementCount());
+        m.addProperty("nodes", f.mesh().nodeCount());
+        m.addProperty("elementType", "6-node triangle");
+        m.addProperty("minAngleDeg", f.mesh().minAngleDeg());
+        o.add("mesh", m);
+        JsonArray sing = new JsonArray();
+        for (Singularity s : f.mesh().singularities()) {
+            JsonObject so = new JsonObject();
+            so.addProperty("x", s.x());
+            so.addProperty("y", s.y());
+            so.addProperty("interiorAngleDeg", s.interiorAngleDeg());
+            so.addProperty("note", "sharp re-entrant corner: peak shear stress here is singular; model the fillet");
+            sing.add(so);
+        }
+        o.add("singularCorners", sing);
+        JsonArray eq = new JsonArray();
+        for (double d : f.equilibriumErrors()) {
+            eq.add(d);
+        }
+        o.add("equilibriumResiduals", eq);
+        if (t.refined() != null) {
+            FiniteElementSolution r = t.refined();
+            JsonObject c = new JsonObject();
+            c.addProperty("elementsRefined", r.mesh().elementCount());
+            c.addProperty("JWarpingRefined", r.jWarping());
+            c.addProperty("peakTorsionStressPerUnitTorqueRefined", r.peakUnitTorsionStress());
+            c.addProperty("JChange", (r.jWarping() - f.jWarping()) / r.jWarping());
+            c.addProperty("peakChange", (r.peakUnitTorsionStress() - f.peakUnitTorsionStress()) / r.peakUnitTorsionStress());
+            o.add("convergence", c);
+        }
         return o;
     }
 

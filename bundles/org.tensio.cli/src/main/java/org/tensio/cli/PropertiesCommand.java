@@ -7,6 +7,7 @@ import java.util.concurrent.Callable;
 
 import org.tensio.engine.project.Project;
 import org.tensio.engine.properties.SectionProperties;
+import org.tensio.engine.section.Section;
 import org.tensio.engine.service.SectionAnalysisService;
 
 import com.google.gson.JsonArray;
@@ -34,32 +35,39 @@ final class PropertiesCommand implements Callable<Integer> {
     @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
     Format format;
 
+    @Option(names = "--convergence", description = "also solve on a refined mesh (about 4x the elements) and report"
+            + " J and the peak torsion stress on both meshes")
+    boolean convergence;
+
     @Override
     public Integer call() throws Exception {
         SectionAnalysisService engine = SectionAnalysisService.create();
         Project project = engine.readProject(file);
+        List<Section> sections = sectionId != null ? List.of(project.section(sectionId))
+                : new ArrayList<>(project.sections().values());
         List<SectionProperties> list = new ArrayList<>();
-        if (sectionId != null) {
-            list.add(engine.properties(project.section(sectionId)));
-        } else {
-            for (var s : project.sections().values()) {
-                list.add(engine.properties(s));
-            }
+        List<TorsionReport> torsion = new ArrayList<>();
+        for (Section s : sections) {
+            SectionProperties p = engine.properties(s);
+            list.add(p);
+            torsion.add(TorsionReport.of(engine, s, p, convergence));
         }
         var out = spec.commandLine().getOut();
         if (format == Format.json) {
             if (list.size() == 1) {
-                out.println(Json.GSON.toJson(Json.properties(list.get(0), project.units())));
+                out.println(Json.GSON.toJson(Json.properties(list.get(0), torsion.get(0), project.units())));
             } else {
                 JsonObject o = new JsonObject();
                 JsonArray arr = new JsonArray();
-                list.forEach(p -> arr.add(Json.properties(p, project.units())));
+                for (int i = 0; i < list.size(); i++) {
+                    arr.add(Json.properties(list.get(i), torsion.get(i), project.units()));
+                }
                 o.add("sections", arr);
                 out.println(Json.GSON.toJson(o));
             }
         } else {
-            for (SectionProperties p : list) {
-                out.print(Text.properties(p, project.units()));
+            for (int i = 0; i < list.size(); i++) {
+                out.print(Text.properties(list.get(i), torsion.get(i), project.units()));
                 out.println();
             }
             out.println(Caution.TEXT);

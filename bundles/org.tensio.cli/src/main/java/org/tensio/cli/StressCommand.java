@@ -7,6 +7,7 @@ import org.tensio.engine.geometry.Point2;
 import org.tensio.engine.project.Project;
 import org.tensio.engine.service.SectionAnalysisService;
 import org.tensio.engine.stress.PointStress;
+import org.tensio.engine.stress.ShearMethod;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -36,12 +37,16 @@ final class StressCommand implements Callable<Integer> {
     @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
     Format format;
 
+    @Option(names = "--shear-method", paramLabel = "METHOD", defaultValue = "finiteElement",
+            description = "finiteElement (shear functions, default) or elementary (VQ/(It) on straight cuts, for comparison)")
+    ShearMethod shearMethod;
+
     @Override
     public Integer call() throws Exception {
         Point2 p = parsePoint(at);
         SectionAnalysisService engine = SectionAnalysisService.create();
         Project project = engine.readProject(file);
-        PointStress s = engine.stressAt(project, station, caseId, p);
+        PointStress s = engine.stressAt(project, station, caseId, p, shearMethod);
         String sectionId = project.station(station).sectionId();
         var out = spec.commandLine().getOut();
         if (format == Format.json) {

@@ -4,7 +4,9 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.Map;
 
+import org.tensio.engine.fem.FiniteElementSolution;
 import org.tensio.engine.loads.ForceComponent;
+import org.tensio.engine.mesh.Singularity;
 import org.tensio.engine.properties.SectionProperties;
 import org.tensio.engine.stress.PointStress;
 import org.tensio.engine.stress.PrincipalStresses;
@@ -36,6 +38,39 @@ final class Text {
         sb.append(String.format("  %-28s %16s %s%n", label, value, unit == null ? "" : unit));
     }
 
+    static String properties(SectionProperties p, TorsionReport t, UnitSystem u) {
+        StringBuilder sb = new StringBuilder(properties(p, u));
+        String l = u.length();
+        if (t.solution() == null) {
+            sb.append("  finite-element solution failed: ").append(t.error()).append(System.lineSeparator());
+            return sb.toString();
+        }
+        FiniteElementSolution f = t.solution();
+        line(sb, "J warping / stress function", num(f.jWarping()) + " / " + num(f.jPrandtl()), l + "⁴ (bracket "
+                + String.format("%.2e", f.jBracket()) + ")");
+        line(sb, "FE shear centre", "(" + num(f.shearCentre().x()) + ", " + num(f.shearCentre().y()) + ")", l);
+        var k = t.shearCoefficients();
+        if (k != null) {
+            line(sb, "shear coefficients kx, ky", num(k.get(0)) + ", " + num(k.get(1)), "(energy method)");
+        }
+        line(sb, "peak torsion stress / T", num(f.peakUnitTorsionStress()), "1/" + l + "³ at (" + num(f.peakUnitTorsionAt().x())
+                + ", " + num(f.peakUnitTorsionAt().y()) + ")");
+        line(sb, "mesh", f.mesh().elementCount() + " el.", "6-node triangles, min angle "
+                + String.format("%.1f", f.mesh().minAngleDeg()) + "°");
+        for (Singularity s : f.mesh().singularities()) {
+            sb.append(String.format("  note: sharp re-entrant corner at (%s, %s), %.1f°: shear stress singular there;"
+                    + " model the fillet%n", num(s.x()), num(s.y()), s.interiorAngleDeg()));
+        }
+        if (t.refined() != null) {
+            FiniteElementSolution r = t.refined();
+            line(sb, "refined mesh: J, peak / T", num(r.jWarping()) + ", " + num(r.peakUnitTorsionStress()),
+                    r.mesh().elementCount() + " el. (J change " + String.format("%.1e", (r.jWarping() - f.jWarping()) / r.jWarping())
+                            + ", peak change " + String.format("%.1e", (r.peakUnitTorsionStress() - f.peakUnitTorsionStress())
+                                    / r.peakUnitTorsionStress()) + ")");
+        }
+        return sb.toString();
+    }
+
     static String properties(SectionProperties p, UnitSystem u) {
         String l = u.length();
         StringBuilder sb = new StringBuilder();
@@ -59,7 +94,7 @@ final class Text {
         line(sb, "Sy right / left", num(p.syRight()) + " / " + num(p.syLeft()), l + "³");
         line(sb, "Zx (plastic), axis at y", num(p.zx()) + " @ " + num(p.plasticAxisY()), l + "³ @ " + l);
         line(sb, "Zy (plastic), axis at x", num(p.zy()) + " @ " + num(p.plasticAxisX()), l + "³ @ " + l);
-        line(sb, "J (torsion constant)", num(p.j()), p.j() == null ? "(needs finite-element solution)" : l + "⁴");
+        line(sb, "J (torsion constant)", num(p.j()), p.j() == null ? "" : l + "⁴ (" + p.torsionSource() + ")");
         line(sb, "shear centre", p.shearCentre() == null ? "not computed"
                 : "(" + num(p.shearCentre().x()) + ", " + num(p.shearCentre().y()) + ")", p.shearCentre() == null ? "" : l);
         line(sb, "Cw (warping constant)", num(p.cw()), p.cw() == null ? "" : l + "⁶");
