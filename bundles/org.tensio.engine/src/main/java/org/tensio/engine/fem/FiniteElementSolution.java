@@ -102,36 +102,12 @@ public final class FiniteElementSolution {
             double x = mesh.x(i) - centroid.x(), y = mesh.y(i) - centroid.y();
             os[i] = omega[i] + xs * y - ys * x;
         }
-        double m2 = 0;
-        for (int e = 0; e < ne; e++) {
-            el.load(mesh, e, centroid.x(), centroid.y());
-            for (double[] q : Quadrature.TRI7) {
-                el.at(q[0], q[1]);
-                double v = 0;
-                for (int i = 0; i < 6; i++) {
-                    v += el.n[i] * os[mesh.node(e, i)];
-                }
-                m2 += q[2] * el.detJ * nW[e] * v;
-            }
-        }
-        double shift = m2 / area;
+        double shift = integrate(mesh, nW, os, 1) / area;
         for (int i = 0; i < os.length; i++) {
             os[i] -= shift;
         }
-        double cwSum = 0;
-        for (int e = 0; e < ne; e++) {
-            el.load(mesh, e, centroid.x(), centroid.y());
-            for (double[] q : Quadrature.TRI7) {
-                el.at(q[0], q[1]);
-                double v = 0;
-                for (int i = 0; i < 6; i++) {
-                    v += el.n[i] * os[mesh.node(e, i)];
-                }
-                cwSum += q[2] * el.detJ * nW[e] * v * v;
-            }
-        }
         this.omega = os;
-        this.cw = cwSum;
+        this.cw = integrate(mesh, nW, os, 2);
         this.psi = psi;
         this.phi = phi;
         this.grad = smooth();
@@ -187,6 +163,24 @@ public final class FiniteElementSolution {
         }
         this.peakUnitTorsion = peak;
         this.peakUnitTorsionAt = at;
+    }
+
+    /** @return Σ_e w_e ∫ u^power dA of the nodal field u over the mesh (power 1 or 2) */
+    private static double integrate(Mesh mesh, double[] weight, double[] u, int power) {
+        P2Element el = new P2Element();
+        double sum = 0;
+        for (int e = 0; e < mesh.elementCount(); e++) {
+            el.load(mesh, e, 0, 0);
+            for (double[] q : Quadrature.TRI7) {
+                el.at(q[0], q[1]);
+                double v = 0;
+                for (int i = 0; i < 6; i++) {
+                    v += el.n[i] * u[mesh.node(e, i)];
+                }
+                sum += q[2] * el.detJ * weight[e] * (power == 1 ? v : v * v);
+            }
+        }
+        return sum;
     }
 
     /** τ per unit load of field f (0 torsion, 1 Vx, 2 Vy) from the element's own gradient at the loaded point. */
