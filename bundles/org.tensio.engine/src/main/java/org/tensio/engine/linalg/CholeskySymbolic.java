@@ -8,15 +8,15 @@ import java.util.Arrays;
  * supernode. Depends only on the pattern of A, the ordering and the pinned set.
  * <p>
  * Algorithms (Davis, <i>Direct Methods for Sparse Linear Systems</i>, SIAM 2006, ch. 4 — from memory): the
- * elimination tree by Liu's algorithm with path compression, a depth-first postorder, column counts by
- * traversing the row subtrees (O(nnz(L)) instead of the Gilbert–Ng–Peyton O(nnz(A)·α) method, simpler and
- * cheap next to the numeric phase), fundamental supernodes (Liu, Ng &amp; Peyton 1993), and relaxed
- * amalgamation with the thresholds of CHOLMOD (Chen, Davis, Hager &amp; Rajamanickam, ACM TOMS 35, 2008 —
- * from memory): merge a child into its parent when the merged supernode has at most 4 columns, or at most
- * 16 columns and under 80 % explicit zeros, or at most 48 and under 10 %, or any size and under 5 %.
+ * elimination tree by Liu's algorithm with path compression, a depth-first postorder, column counts by the
+ * Gilbert–Ng–Peyton skeleton method in O(nnz(A)·α), fundamental supernodes (Liu, Ng &amp; Peyton, SIAM J. Matrix
+ * Anal. Appl. 14, 1993), and relaxed amalgamation with the thresholds of CHOLMOD (Chen, Davis, Hager &amp;
+ * Rajamanickam, ACM TOMS 35, 2008 — from memory): merge a child into its parent when the merged supernode has at
+ * most 4 columns, or at most 16 columns and under 80 % explicit zeros, or at most 48 and under 10 %, or any size
+ * and under 5 %. A child is merged only when its columns immediately precede the parent's, so supernodes stay
+ * contiguous column ranges in postorder and the multifrontal stack discipline holds.
  */
 final class CholeskySymbolic {
-    static final class T { static long last = System.nanoTime(); static StringBuilder sb = new StringBuilder(); static void t(String l) { long now = System.nanoTime(); sb.append(l).append(String.format("%.3f ", (now - last) * 1e-9)); last = now; if (l.equals("I")) { if (Boolean.getBoolean("sym.debug")) System.err.println(sb); sb.setLength(0);} } }
 
     /** Order of A. */
     final int n;
@@ -77,11 +77,7 @@ final class CholeskySymbolic {
             }
         }
         // elimination tree of the ordering, then postorder it and relabel
-        T.t("A");
-        int[][] upper0 = upperPattern(rs, ci, p0);
-        T.t("B");
-        int[] parent0 = etree(upper0[0], upper0[1], nf);
-        T.t("C");
+        int[] parent0 = etree(rs, ci, p0, fullInverse(p0));
         int[] post = postorder(parent0, nf);
         perm = new int[nf];
         for (int k = 0; k < nf; k++) {
@@ -97,15 +93,11 @@ final class CholeskySymbolic {
             int pk = parent0[post[k]];
             parent[k] = pk < 0 ? -1 : postInv[pk];
         }
-        T.t("D");
-        int[][] upper = upperPattern(rs, ci, perm);
-        T.t("E");
-        int[][] lower = lowerPattern(rs, ci, perm);
+        int[][] lower = lowerPattern(rs, ci, perm, inv);
         colPtr = lower[0];
         rowIdx = lower[1];
         srcPos = lower[2];
-        T.t("F");
-        colCount = columnCounts(upper[0], upper[1], parent, nf);
+        colCount = columnCounts(colPtr, rowIdx, parent, nf);
         long nz = 0;
         double fl = 0;
         for (int j = 0; j < nf; j++) {
@@ -115,7 +107,6 @@ final class CholeskySymbolic {
         nnzL = nz;
         flops = fl;
 
-        T.t("G");
         // ---- fundamental supernodes
         int[] nchild = new int[nf];
         for (int j = 0; j < nf; j++) {
@@ -227,7 +218,6 @@ final class CholeskySymbolic {
             }
         }
 
-        T.t("H");
         // ---- row structure of each supernode
         superRows = new int[ns][];
         int[] mark = new int[nf];
@@ -282,55 +272,19 @@ final class CholeskySymbolic {
                 subtreeWork[superParent[s]] += subtreeWork[s];
             }
         }
-        T.t("I");
         storedEntries = stored;
         maxFront = maxM;
     }
 
-    /**
-     * Strict upper triangle of PAPᵀ by columns (equivalently the strict lower triangle by rows): column k lists
-     * the rows i &lt; k. Pinned unknowns (inv = −1 in the full-size map) are dropped.
-     */
-    private int[][] upperPattern(int[] rs, int[] ci, int[] p) {
+    /** Lower triangle (diagonal included) of PAPᵀ by columns, rows increasing, with source positions in A. */
+    private static int[][] lowerPattern(int[] rs, int[] ci, int[] p, int[] full) {
         int m = p.length;
-        int[] full = fullInverse(p);
-        int[] ptr = new int[m + 1];
-        for (int k = 0; k < m; k++) {
-            int r = p[k];
-            int c = 0;
-            for (int q = rs[r]; q < rs[r + 1]; q++) {
-                int i = full[ci[q]];
-                if (i >= 0 && i < k) {
-                    c++;
-                }
-            }
-            ptr[k + 1] = ptr[k] + c;
-        }
-        int[] idx = new int[ptr[m]];
-        for (int k = 0; k < m; k++) {
-            int r = p[k];
-            int w = ptr[k];
-            for (int q = rs[r]; q < rs[r + 1]; q++) {
-                int i = full[ci[q]];
-                if (i >= 0 && i < k) {
-                    idx[w++] = i;
-                }
-            }
-        }
-        return new int[][] {ptr, idx};
-    }
-
-    /** Lower triangle (diagonal included) of PAPᵀ by columns, rows increasing, with source positions. */
-    private int[][] lowerPattern(int[] rs, int[] ci, int[] p) {
-        int m = p.length;
-        int[] full = fullInverse(p);
         int[] ptr = new int[m + 1];
         for (int j = 0; j < m; j++) {
             int r = p[j];
             int c = 0;
             for (int q = rs[r]; q < rs[r + 1]; q++) {
-                int i = full[ci[q]];
-                if (i >= j) {
+                if (full[ci[q]] >= j) {
                     c++;
                 }
             }
@@ -338,24 +292,23 @@ final class CholeskySymbolic {
         }
         int[] idx = new int[ptr[m]];
         int[] src = new int[ptr[m]];
-        long[] keys = new long[16];
         for (int j = 0; j < m; j++) {
             int r = p[j];
-            int w = 0;
-            int len = ptr[j + 1] - ptr[j];
-            if (keys.length < len) {
-                keys = new long[len];
-            }
+            int b = ptr[j];
+            int w = b;
             for (int q = rs[r]; q < rs[r + 1]; q++) {
                 int i = full[ci[q]];
                 if (i >= j) {
-                    keys[w++] = ((long) i << 32) | q;
+                    // insertion into the sorted run idx[b … w)
+                    int t = w++;
+                    while (t > b && idx[t - 1] > i) {
+                        idx[t] = idx[t - 1];
+                        src[t] = src[t - 1];
+                        t--;
+                    }
+                    idx[t] = i;
+                    src[t] = q;
                 }
-            }
-            Arrays.sort(keys, 0, w);
-            for (int t = 0; t < w; t++) {
-                idx[ptr[j] + t] = (int) (keys[t] >>> 32);
-                src[ptr[j] + t] = (int) keys[t];
             }
         }
         return new int[][] {ptr, idx, src};
@@ -370,15 +323,20 @@ final class CholeskySymbolic {
         return full;
     }
 
-    /** Liu's elimination-tree algorithm with path compression (Davis 2006, §4.1). */
-    static int[] etree(int[] ptr, int[] idx, int m) {
+    /**
+     * Liu's elimination-tree algorithm with path compression (Davis 2006, §4.1), reading row p[k] of the full
+     * pattern of A for the entries i &lt; k of row k of PAPᵀ; full maps A's indices to the order (−1 = pinned).
+     */
+    static int[] etree(int[] rs, int[] ci, int[] p, int[] full) {
+        int m = p.length;
         int[] par = new int[m];
         int[] anc = new int[m];
         for (int k = 0; k < m; k++) {
             par[k] = -1;
             anc[k] = -1;
-            for (int q = ptr[k]; q < ptr[k + 1]; q++) {
-                int i = idx[q];
+            int r = p[k];
+            for (int q = rs[r]; q < rs[r + 1]; q++) {
+                int i = full[ci[q]];
                 while (i != -1 && i < k) {
                     int next = anc[i];
                     anc[i] = k;
@@ -427,20 +385,84 @@ final class CholeskySymbolic {
         return post;
     }
 
-    /** Column counts of L by walking each row subtree of the elimination tree (Davis 2006, §4.4). */
+    /**
+     * Column counts of L in O(nnz(A)·α) by the skeleton-matrix / least-common-ancestor method of Gilbert, Ng
+     * &amp; Peyton (SIAM J. Matrix Anal. Appl. 15, 1994), as in CSparse's cs_counts (Davis 2006, §4.5 — from
+     * memory). The tree must be postordered (children before parents, subtrees contiguous); ptr/idx is the
+     * lower triangle by columns.
+     */
     static int[] columnCounts(int[] ptr, int[] idx, int[] par, int m) {
+        int[] delta = new int[m];
+        int[] first = new int[m];
+        int[] maxFirst = new int[m];
+        int[] prevLeaf = new int[m];
+        int[] ancestor = new int[m];
+        Arrays.fill(first, -1);
+        Arrays.fill(maxFirst, -1);
+        Arrays.fill(prevLeaf, -1);
+        for (int k = 0; k < m; k++) {
+            int j = k;
+            delta[j] = first[j] == -1 ? 1 : 0;
+            for (; j != -1 && first[j] == -1; j = par[j]) {
+                first[j] = k;
+            }
+            ancestor[k] = k;
+        }
+        for (int j = 0; j < m; j++) {
+            if (par[j] != -1) {
+                delta[par[j]]--;
+            }
+            for (int q = ptr[j]; q < ptr[j + 1]; q++) {
+                int i = idx[q];
+                if (i <= j || first[j] <= maxFirst[i]) {
+                    continue; // j is not a leaf of the i-th row subtree
+                }
+                maxFirst[i] = first[j];
+                int jprev = prevLeaf[i];
+                prevLeaf[i] = j;
+                delta[j]++; // A(i, j) is in the skeleton matrix
+                if (jprev != -1) {
+                    // subsequent leaf: subtract at the least common ancestor of jprev and j
+                    int lca = jprev;
+                    while (lca != ancestor[lca]) {
+                        lca = ancestor[lca];
+                    }
+                    for (int s = jprev; s != lca;) {
+                        int next = ancestor[s];
+                        ancestor[s] = lca;
+                        s = next;
+                    }
+                    delta[lca]--;
+                }
+            }
+            if (par[j] != -1) {
+                ancestor[j] = par[j];
+            }
+        }
+        for (int j = 0; j < m; j++) {
+            if (par[j] != -1) {
+                delta[par[j]] += delta[j];
+            }
+        }
+        return delta;
+    }
+
+    /** Column counts by walking each row subtree, O(nnz(L)); a slow reference for the tests. */
+    static int[] columnCountsByRowSubtrees(SymmetricCsr a, CholeskySymbolic s) {
+        int m = s.nf;
         int[] cc = new int[m];
         int[] mark = new int[m];
         Arrays.fill(mark, -1);
         for (int k = 0; k < m; k++) {
             cc[k]++;
             mark[k] = k;
-            for (int q = ptr[k]; q < ptr[k + 1]; q++) {
-                int i = idx[q];
-                while (mark[i] != k) {
+            int r = s.perm[k];
+            for (int q = a.rowStart()[r]; q < a.rowStart()[r + 1]; q++) {
+                int i = s.inv[a.columns()[q]];
+                while (i >= 0 && i < k && mark[i] != k) {
                     cc[i]++;
                     mark[i] = k;
-                    i = par[i];
+                    i = s.parent[i];
                 }
             }
         }

@@ -35,10 +35,11 @@ public final class SparseCholesky {
     /**
      * Options of a factorisation.
      *
-     * @param pivotTolerance τ ≥ 0: a pivot d<sub>j</sub> ≤ τ·a<sub>jj</sub> is rejected. The default
-     *                       {@value #DEFAULT_PIVOT_TOLERANCE} separates the last pivot of a Laplacian singular by
-     *                       a constant (≈ 1e-14 relative or below, rounding) from those of well-posed mesh problems
-     *                       (≥ 1e-6 relative in the tests, up to 400 000 unknowns); raise it to be stricter
+     * @param pivotTolerance τ in [0, 1): a pivot d<sub>j</sub> ≤ τ·a<sub>jj</sub> is rejected. The default
+     *                       {@value #DEFAULT_PIVOT_TOLERANCE} separates the last pivot of a P1 or P2 Laplacian
+     *                       singular by a constant (|d/a| ≤ 1e-13 measured up to 410 000 unknowns: rounding) from
+     *                       the pivots of the same problems with one node pinned (d/a ≥ 0.02); raise it to be
+     *                       stricter, 0 accepts any positive pivot
      * @param parallelism    number of threads, ≥ 1 (1 = the calling thread only)
      * @param monitor        progress and cancellation, not null ({@link ProgressMonitor#NONE})
      * @since 0.1
