@@ -7,8 +7,9 @@ import org.tensio.engine.geometry.Point2;
  *
  * @param station     station id
  * @param caseId      load case or combination id
- * @param criterion   criterion name ({@link Criterion} for static checks; other families add their own)
- * @param material    material of the governing point
+ * @param criterion   criterion name ({@link org.tensio.engine.section.Criterion} for static checks; other families
+ *                    add their own)
+ * @param material    material id of the governing point (each material is checked against its own limits)
  * @param utilisation demand / capacity (pass when ≤ 1)
  * @param demand      stress unit
  * @param capacity    stress unit
@@ -16,7 +17,8 @@ import org.tensio.engine.geometry.Point2;
  * @param sigmaZ      stress state at the point, stress unit
  * @param tauZX       stress state at the point
  * @param tauZY       stress state at the point
- * @param singular    true when the point is at a sharp re-entrant corner (value mesh-dependent)
+ * @param singular    true when the point lies within 2 % of the section's bounding-box diagonal of a sharp
+ *                    re-entrant corner of the mesh (shear there is mesh-dependent)
  * @since 0.1
  */
 public record CheckResult(String station, String caseId, String criterion, String material, double utilisation,
