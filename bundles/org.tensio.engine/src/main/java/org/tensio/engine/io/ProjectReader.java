@@ -28,6 +28,8 @@ import org.tensio.engine.geometry.Contour;
 import org.tensio.engine.geometry.LineSegment;
 import org.tensio.engine.geometry.Point2;
 import org.tensio.engine.geometry.Segment;
+import org.tensio.engine.io.LoadTableReader.StationCases;
+import org.tensio.engine.loads.ForceComponent;
 import org.tensio.engine.loads.InternalForces;
 import org.tensio.engine.profile.ArbitraryClosedProfile;
 import org.tensio.engine.profile.ArbitraryProfileWithVoids;
@@ -36,7 +38,9 @@ import org.tensio.engine.profile.ProfileTypes;
 import org.tensio.engine.project.Combination;
 import org.tensio.engine.project.Project;
 import org.tensio.engine.project.Station;
+import org.tensio.engine.section.Criterion;
 import org.tensio.engine.section.Material;
+import org.tensio.engine.section.MaterialLimits;
 import org.tensio.engine.section.Section;
 import org.tensio.engine.section.SectionPart;
 import org.tensio.engine.section.SectionValidator;
@@ -53,9 +57,16 @@ import org.tensio.engine.units.UnitSystem;
  * {@code $.sections.shaft.profile.radius}; the containing object when a key is missing) and whose message
  * names the value. No other exception escapes {@link #read} or {@link #parse}, for any input.
  * <p>
+ * Materials with a strength ({@code fy}, {@code fu}) or an {@code allowable} get {@link MaterialLimits}
+ * ({@link Project#limits()}); the others are not checked. Load cases may also come from CSV load tables
+ * ({@code loadTables}, read by {@code LoadTableReader}): their files are resolved against the project file's
+ * folder, so {@link #read} and {@link #parse(String, String, Path)} with a folder read them and
+ * {@link #parse(String, String)} rejects them. Table values are converted to the project's units; nothing else
+ * is converted: the project keeps the units of its file.
+ * <p>
  * Limits: files of at most {@value #MAX_FILE_BYTES} bytes (16 MiB), nesting at most {@value #MAX_DEPTH}
- * levels, at most {@value #MAX_LOOP_VERTICES} vertices in one loop. No unit conversion happens: the project
- * keeps the units of its file.
+ * levels, at most {@value #MAX_LOOP_VERTICES} vertices in one loop; load tables of at most
+ * {@value #MAX_TABLE_BYTES} bytes (64 MiB) and {@value #MAX_TABLE_ROWS} data rows each.
  * <p>
  * Single use; the static methods are the entry points. Thread-safe in that each call has its own state.
  *
@@ -71,14 +82,27 @@ public final class ProjectReader {
     public static final int MAX_DEPTH = 64;
     /** Most vertices accepted in one loop. */
     public static final int MAX_LOOP_VERTICES = 200_000;
+    /** Largest load table accepted, bytes (64 MiB). */
+    public static final long MAX_TABLE_BYTES = LoadTableReader.MAX_BYTES;
+    /** Most data rows (non-blank rows after the header) accepted in one load table. */
+    public static final int MAX_TABLE_ROWS = LoadTableReader.MAX_ROWS;
 
-    private static final Set<String> ROOT_KEYS = Set.of("tensio", "name", "description", "units", "materials",
-            "sections", "stations", "combinations");
+    static final Set<String> ROOT_KEYS = Set.of("tensio", "name", "description", "units", "materials",
+            "sections", "stations", "loadTables", "combinations");
     private static final Set<String> UNIT_KEYS = Set.of("length", "force");
-    private static final Set<String> MATERIAL_KEYS = Set.of("E", "nu", "fy");
+    static final Set<String> MATERIAL_KEYS = Set.of("E", "nu", "fy", "fu", "partialFactor", "criteria", "allowable");
+    static final Set<String> ALLOWABLE_KEYS = Set.of("normal", "shear", "equivalent");
+    static final Set<String> LOAD_TABLE_KEYS = Set.of("file", "description", "units", "columns", "delimiter",
+            "decimalSeparator", "scale", "headerRow", "unknownStations");
+    /** Field separators a load table may use. */
+    static final List<String> DELIMITERS = List.of(",", ";", "\t");
+    /** Decimal separators a load table may use. */
+    static final List<String> DECIMAL_SEPARATORS = List.of(".", ",");
+    /** What to do with table rows of stations the project does not define. */
+    static final List<String> UNKNOWN_STATIONS = List.of("reject", "skip");
     private static final Set<String> SECTION_KEYS = Set.of("description", "material", "profile", "offset", "parts");
     private static final Set<String> PART_KEYS = Set.of("material", "profile", "offset");
-    private static final Set<String> STATION_KEYS = Set.of("section", "forces");
+    static final Set<String> STATION_KEYS = Set.of("section", "forces");
     private static final Set<String> FORCE_KEYS = Set.of("N", "Vx", "Vy", "Mx", "My", "T");
     private static final Set<String> CLOSED_KEYS = Set.of("type", "outer");
     private static final Set<String> VOIDS_KEYS = Set.of("type", "outer", "voids");
@@ -86,13 +110,17 @@ public final class ProjectReader {
     private static final Set<String> CENTRE_KEYS = Set.of("centre", "turn");
 
     private final String suffix;
+    private final Path baseDir;
+    private final Map<String, MaterialLimits> limits = new LinkedHashMap<>();
 
-    private ProjectReader(String sourceName) {
+    private ProjectReader(String sourceName, Path baseDir) {
         this.suffix = sourceName == null || sourceName.isEmpty() ? "" : " (in " + sourceName + ")";
+        this.baseDir = baseDir;
     }
 
     /**
-     * Reads and validates a project file (UTF-8, an optional byte-order mark is skipped).
+     * Reads and validates a project file (UTF-8, an optional byte-order mark is skipped). Load tables are
+     * resolved against the file's folder.
      *
      * @param file the file
      * @return the project
@@ -121,11 +149,12 @@ public final class ProjectReader {
         } catch (CharacterCodingException e) {
             throw new ProjectFormatException("$", "the file is not valid UTF-8 text (in " + source + ")");
         }
-        return parse(text, source);
+        return parse(text, source, file.toAbsolutePath().getParent());
     }
 
     /**
-     * Parses and validates a project from its JSON text.
+     * Parses and validates a project from its JSON text, without a folder: a project with {@code loadTables}
+     * is rejected (use {@link #read} or {@link #parse(String, String, Path)}).
      *
      * @param json       the document; a leading byte-order mark is skipped; null counts as empty
      * @param sourceName where the text came from, quoted in messages as "(in sourceName)"; may be null
@@ -133,6 +162,21 @@ public final class ProjectReader {
      * @throws ProjectFormatException when the text is not a valid project
      */
     public static Project parse(String json, String sourceName) throws ProjectFormatException {
+        return parse(json, sourceName, null);
+    }
+
+    /**
+     * Parses and validates a project from its JSON text, reading its load tables from a folder.
+     *
+     * @param json       the document; a leading byte-order mark is skipped; null counts as empty
+     * @param sourceName where the text came from, quoted in messages as "(in sourceName)"; may be null
+     * @param baseDir    the folder that {@code loadTables} file names are relative to (normally the project
+     *                   file's folder); null when there is none, which makes {@code loadTables} an error
+     * @return the project
+     * @throws ProjectFormatException when the text is not a valid project, or a load table cannot be read or is
+     *                                not valid (I/O errors on a table included, naming the file)
+     */
+    public static Project parse(String json, String sourceName, Path baseDir) throws ProjectFormatException {
         String text = json == null ? "" : json;
         if (text.startsWith("\uFEFF")) {
             text = text.substring(1);
@@ -143,7 +187,7 @@ public final class ProjectReader {
                 throw tooLarge(bytes, sourceName);
             }
         }
-        ProjectReader reader = new ProjectReader(sourceName);
+        ProjectReader reader = new ProjectReader(sourceName, baseDir);
         try {
             JsonElement root = StrictJson.parse(text, MAX_DEPTH, 2 * MAX_LOOP_VERTICES + 1, reader.suffix);
             return reader.project(root);
@@ -201,13 +245,28 @@ public final class ProjectReader {
         UnitSystem units = units(f);
         Map<String, Material> materials = materials(f.require("materials"), root.child("materials"));
         Map<String, Section> sections = sections(f.require("sections"), root.child("sections"), materials);
-        Map<String, Station> stations = f.has("stations")
+        Map<String, StationCases> building = f.has("stations")
                 ? stations(f.get("stations"), root.child("stations"), sections)
-                : Map.of();
+                : new LinkedHashMap<>();
+        if (f.has("loadTables")) {
+            loadTables(f.get("loadTables"), root.child("loadTables"), units, building);
+        }
+        Map<String, Station> stations = new LinkedHashMap<>();
+        for (StationCases s : building.values()) {
+            if (!s.forcesGiven && s.cases.isEmpty()) {
+                throw fail(s.path, "missing required key 'forces' (the station's load cases; it may be left out "
+                        + "only when a load table gives the station's rows)");
+            }
+            try {
+                stations.put(s.id, new Station(s.id, s.sectionId, s.cases));
+            } catch (IllegalArgumentException ex) {
+                throw fail(s.path, ex.getMessage());
+            }
+        }
         Map<String, Combination> combinations = f.has("combinations")
                 ? combinations(f.get("combinations"), root.child("combinations"), stations)
                 : Map.of();
-        return new Project(units, materials, sections, stations, combinations);
+        return new Project(units, materials, sections, stations, combinations, limits);
     }
 
     private UnitSystem units(Fields root) throws ProjectFormatException {
@@ -246,8 +305,124 @@ public final class ProjectReader {
             } catch (IllegalArgumentException ex) {
                 throw rethrow(ex, f);
             }
+            MaterialLimits l = limits(id, f, fy);
+            if (l != null) {
+                limits.put(id, l);
+            }
         }
         return out;
+    }
+
+    /** @return what the material is checked against, or null when it gives no strength and no allowable */
+    private MaterialLimits limits(String id, Fields f, Double fy) throws ProjectFormatException {
+        JsonPath p = f.path;
+        Double fu = null;
+        if (f.has("fu")) {
+            fu = f.number("fu");
+            if (!(fu > 0)) {
+                throw fail(p.child("fu"), "fu: " + fmt(fu) + " must be positive (the ultimate strength, "
+                        + "force/length²)");
+            }
+            if (fy != null && fu < fy) {
+                throw fail(p.child("fu"), "fu: " + fmt(fu) + " is below fy " + fmt(fy) + " (the ultimate strength "
+                        + "cannot be less than the yield strength)");
+            }
+        }
+        double gamma = 1.0;
+        if (f.has("partialFactor")) {
+            gamma = f.number("partialFactor");
+            if (!(gamma >= 1)) {
+                throw fail(p.child("partialFactor"), "partialFactor: " + fmt(gamma) + " must be at least 1 (the "
+                        + "strengths are divided by it)");
+            }
+        }
+        String[] allowableKeys = {"normal", "shear", "equivalent"};
+        Double[] allowable = new Double[allowableKeys.length];
+        boolean anyAllowable = false;
+        if (f.has("allowable")) {
+            JsonPath ap = p.child("allowable");
+            Fields af = new Fields(object(f.get("allowable"), ap), ap, ALLOWABLE_KEYS);
+            if (af.o.isEmpty()) {
+                throw fail(ap, "allowable needs at least one of " + List.of(allowableKeys) + ", got {}");
+            }
+            for (int i = 0; i < allowableKeys.length; i++) {
+                if (af.has(allowableKeys[i])) {
+                    double v = af.number(allowableKeys[i]);
+                    if (!(v > 0)) {
+                        throw fail(ap.child(allowableKeys[i]), allowableKeys[i] + ": " + fmt(v) + " must be positive "
+                                + "(an allowable stress, force/length²)");
+                    }
+                    allowable[i] = v;
+                    anyAllowable = true;
+                }
+            }
+        }
+        List<Criterion> criteria = new ArrayList<>();
+        if (f.has("criteria")) {
+            JsonPath cp = p.child("criteria");
+            JsonArray list = array(f.get("criteria"), cp);
+            if (list.isEmpty()) {
+                throw fail(cp, "criteria needs at least one criterion (one of " + List.of(Criterion.values())
+                        + "), got an empty array");
+            }
+            for (int i = 0; i < list.size(); i++) {
+                String name = string(list.get(i), cp.item(i));
+                Criterion c = criterion(name);
+                if (c == null) {
+                    throw fail(cp.item(i), "unknown criterion '" + StrictJson.abbreviate(name) + "' (use one of "
+                            + List.of(Criterion.values()) + ")");
+                }
+                if (criteria.contains(c)) {
+                    throw fail(cp.item(i), "criterion '" + name + "' is listed twice (items " + criteria.indexOf(c)
+                            + " and " + i + ")");
+                }
+                criteria.add(c);
+            }
+        }
+        if (fy == null && fu == null && !anyAllowable) {
+            for (String key : List.of("criteria", "partialFactor")) {
+                if (f.has(key)) {
+                    throw fail(p.child(key), "'" + key + "' is given but material '" + id + "' has nothing to check "
+                            + "against: give fy, fu or allowable");
+                }
+            }
+            return null;
+        }
+        boolean defaulted = criteria.isEmpty();
+        if (defaulted) {
+            criteria.add(Criterion.vonMises);
+        }
+        for (int i = 0; i < criteria.size(); i++) {
+            Criterion c = criteria.get(i);
+            try {
+                new MaterialLimits(id, List.of(c), gamma, fy, fu, allowable[0], allowable[1], allowable[2]);
+            } catch (IllegalArgumentException ex) {
+                String needs = "criterion " + c + " needs " + switch (c) {
+                    case vonMises, tresca -> "fy or allowable.equivalent";
+                    case maxPrincipal -> "fy, fu or allowable.normal";
+                    case maxShear, shear -> "fy or allowable.shear";
+                    case normal -> "fy or allowable.normal";
+                };
+                throw defaulted
+                        ? fail(p, "the default " + needs + " (material '" + id + "'); give it, or list the criteria "
+                                + "to check with 'criteria'")
+                        : fail(p.child("criteria").item(i), needs + " (material '" + id + "')");
+            }
+        }
+        try {
+            return new MaterialLimits(id, criteria, gamma, fy, fu, allowable[0], allowable[1], allowable[2]);
+        } catch (IllegalArgumentException ex) {
+            throw fail(p, ex.getMessage());
+        }
+    }
+
+    private static Criterion criterion(String name) {
+        for (Criterion c : Criterion.values()) {
+            if (c.name().equals(name)) {
+                return c;
+            }
+        }
+        return null;
     }
 
     // ---------------------------------------------------------------- sections
@@ -548,9 +723,9 @@ public final class ProjectReader {
 
     // ---------------------------------------------------------------- stations and combinations
 
-    private Map<String, Station> stations(JsonElement e, JsonPath p, Map<String, Section> sections)
+    private Map<String, StationCases> stations(JsonElement e, JsonPath p, Map<String, Section> sections)
             throws ProjectFormatException {
-        Map<String, Station> out = new LinkedHashMap<>();
+        Map<String, StationCases> out = new LinkedHashMap<>();
         for (Map.Entry<String, JsonElement> s : object(e, p).entrySet()) {
             JsonPath sp = p.child(s.getKey());
             String id = id(s.getKey(), sp, "station");
@@ -561,8 +736,9 @@ public final class ProjectReader {
                         "unknown section '" + sectionId + "' (defined: " + sections.keySet() + ")");
             }
             JsonPath fp = sp.child("forces");
-            Map<String, InternalForces> cases = new LinkedHashMap<>();
-            for (Map.Entry<String, JsonElement> c : object(f.require("forces"), fp).entrySet()) {
+            StationCases station = new StationCases(id, sectionId, sp, f.has("forces"));
+            JsonObject forces = f.has("forces") ? object(f.get("forces"), fp) : new JsonObject();
+            for (Map.Entry<String, JsonElement> c : forces.entrySet()) {
                 JsonPath cp = fp.child(c.getKey());
                 String caseId = id(c.getKey(), cp, "load case");
                 Fields cf = new Fields(object(c.getValue(), cp), cp, FORCE_KEYS);
@@ -572,18 +748,137 @@ public final class ProjectReader {
                     v[i] = cf.has(keys[i]) ? cf.number(keys[i]) : 0;
                 }
                 try {
-                    cases.put(caseId, new InternalForces(v[0], v[1], v[2], v[3], v[4], v[5]));
+                    station.addFileCase(caseId, new InternalForces(v[0], v[1], v[2], v[3], v[4], v[5]));
                 } catch (IllegalArgumentException ex) {
                     throw fail(cp, ex.getMessage());
                 }
             }
-            try {
-                out.put(id, new Station(id, sectionId, cases));
-            } catch (IllegalArgumentException ex) {
-                throw fail(sp, ex.getMessage());
-            }
+            out.put(id, station);
         }
         return out;
+    }
+
+    // ---------------------------------------------------------------- load tables
+
+    private void loadTables(JsonElement e, JsonPath p, UnitSystem projectUnits, Map<String, StationCases> stations)
+            throws ProjectFormatException {
+        JsonArray list = array(e, p);
+        List<LoadTableReader.Spec> specs = new ArrayList<>(list.size());
+        for (int i = 0; i < list.size(); i++) {
+            specs.add(loadTable(i, list.get(i), p.item(i), projectUnits));
+        }
+        for (LoadTableReader.Spec spec : specs) {
+            if (spec.resolved() == null) {
+                throw fail(spec.path().child("file"), "load table '" + StrictJson.abbreviate(spec.file()) + "' cannot "
+                        + "be found: the project was given as text without its folder (read it from its file, or "
+                        + "pass the folder)");
+            }
+            LoadTableReader.read(spec, specs, stations, projectUnits, suffix);
+        }
+    }
+
+    private LoadTableReader.Spec loadTable(int index, JsonElement e, JsonPath p, UnitSystem projectUnits)
+            throws ProjectFormatException {
+        Fields f = new Fields(object(e, p), p, LOAD_TABLE_KEYS);
+        JsonPath filePath = p.child("file");
+        String file = f.string("file");
+        f.optString("description");
+        if (file.isBlank()) {
+            throw fail(filePath, "file must name a CSV file, got \"" + StrictJson.abbreviate(file) + "\"");
+        }
+        if (file.indexOf('\\') >= 0) {
+            throw fail(filePath, "file '" + StrictJson.abbreviate(file) + "': write folders with '/', not '\\'");
+        }
+        if (file.indexOf('\0') >= 0) {
+            throw fail(filePath, "file '" + StrictJson.abbreviate(file) + "' contains a NUL character");
+        }
+        if (file.startsWith("/") || (file.length() > 1 && file.charAt(1) == ':')) {
+            throw fail(filePath, "file '" + StrictJson.abbreviate(file) + "' must be relative to the project file's "
+                    + "folder (so that the project can move with its tables)");
+        }
+        UnitSystem units = f.has("units") ? units(f) : projectUnits;
+        Map<String, String> columns = new LinkedHashMap<>();
+        if (f.has("columns")) {
+            JsonPath cp = p.child("columns");
+            Fields cf = new Fields(object(f.get("columns"), cp), cp, new LinkedHashSet<>(LoadTableReader.COLUMN_KEYS));
+            Map<String, String> keyOf = new LinkedHashMap<>();
+            for (String key : LoadTableReader.COLUMN_KEYS) {
+                if (!cf.has(key)) {
+                    continue;
+                }
+                String header = cf.string(key);
+                if (header.isBlank()) {
+                    throw fail(cp.child(key), key + ": a column header name must not be empty, got \""
+                            + StrictJson.abbreviate(header) + "\"");
+                }
+                String other = keyOf.putIfAbsent(header, key);
+                if (other != null) {
+                    throw fail(cp.child(key), "column '" + StrictJson.abbreviate(header) + "' is already mapped to "
+                            + other + "; one column cannot give both " + other + " and " + key);
+                }
+                columns.put(key, header);
+            }
+        }
+        char delimiter = ',';
+        if (f.has("delimiter")) {
+            String d = f.string("delimiter");
+            if (!DELIMITERS.contains(d)) {
+                throw fail(p.child("delimiter"), "delimiter must be \",\", \";\" or \"\\t\" (tab), got \""
+                        + StrictJson.abbreviate(d) + "\"");
+            }
+            delimiter = d.charAt(0);
+        }
+        char decimal = '.';
+        if (f.has("decimalSeparator")) {
+            String d = f.string("decimalSeparator");
+            if (!DECIMAL_SEPARATORS.contains(d)) {
+                throw fail(p.child("decimalSeparator"), "decimalSeparator must be \".\" or \",\", got \""
+                        + StrictJson.abbreviate(d) + "\"");
+            }
+            decimal = d.charAt(0);
+            if (decimal == delimiter) {
+                throw fail(p.child("decimalSeparator"), "decimalSeparator ',' needs another delimiter than ',' "
+                        + "(e.g. \"delimiter\": \";\")");
+            }
+        }
+        double[] scale = new double[ForceComponent.values().length];
+        java.util.Arrays.fill(scale, 1.0);
+        if (f.has("scale")) {
+            JsonPath sp = p.child("scale");
+            Fields sf = new Fields(object(f.get("scale"), sp), sp, FORCE_KEYS);
+            for (ForceComponent c : ForceComponent.values()) {
+                if (sf.has(c.key())) {
+                    scale[c.ordinal()] = sf.number(c.key());
+                }
+            }
+        }
+        int headerRow = 1;
+        if (f.has("headerRow")) {
+            double h = f.number("headerRow");
+            if (h != Math.rint(h) || h < 1 || h > MAX_TABLE_ROWS) {
+                throw fail(p.child("headerRow"), "headerRow must be a whole number from 1 to " + MAX_TABLE_ROWS
+                        + " (the 1-based row of the column headers), got " + fmt(h));
+            }
+            headerRow = (int) h;
+        }
+        boolean skip = false;
+        if (f.has("unknownStations")) {
+            String u = f.string("unknownStations");
+            if (!UNKNOWN_STATIONS.contains(u)) {
+                throw fail(p.child("unknownStations"), "unknownStations must be one of " + UNKNOWN_STATIONS
+                        + ", got \"" + StrictJson.abbreviate(u) + "\"");
+            }
+            skip = u.equals("skip");
+        }
+        Path resolved;
+        try {
+            resolved = baseDir == null ? null : baseDir.resolve(file).normalize();
+        } catch (java.nio.file.InvalidPathException ex) {
+            throw fail(filePath, "file '" + StrictJson.abbreviate(file) + "' is not a valid file name here: "
+                    + ex.getReason());
+        }
+        return new LoadTableReader.Spec(index, p, file, resolved, units, columns, f.has("columns"), delimiter,
+                decimal, scale, headerRow, skip);
     }
 
     private Map<String, Combination> combinations(JsonElement e, JsonPath p, Map<String, Station> stations)

@@ -19,8 +19,9 @@ import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * Every rejection rule of the project format: the exception's path and a message that names the value.
- * Most cases are data in {@code src/test/resources/io/bad-inputs.txt}; those that need generated input
- * (sizes, depths, bytes) are here. Rules from the format specification, docs/file-format.md.
+ * Most cases are data in {@code src/test/resources/io/bad-inputs.txt} and, for load tables (CSV files),
+ * {@code load-table-bad-inputs.txt}; those that need generated input (sizes, depths, bytes) are here. Rules
+ * from the format specification, docs/file-format.md.
  */
 class ProjectReaderRejectionTest {
 
@@ -41,6 +42,91 @@ class ProjectReaderRejectionTest {
         assertTrue(e.getMessage().startsWith(expectedPath + ": "), e.getMessage());
         assertTrue(e.getMessage().endsWith("(in bad-inputs.txt:" + line + ")"), e.getMessage());
         assertEquals(-1, e.getMessage().indexOf('\n'), "one-line message");
+    }
+
+    static Stream<Arguments> badLoadTables() {
+        return BadInputs.tableCases().stream();
+    }
+
+    @ParameterizedTest(name = "line {0}: {1}")
+    @MethodSource("badLoadTables")
+    void rejectsLoadTablesNamingFileRowAndColumn(int line, String expectedPath, String fragment, byte[] csv,
+            String json, @TempDir Path dir) throws IOException {
+        Files.write(dir.resolve("loads.csv"), csv);
+        String source = "load-table-bad-inputs.txt:" + line;
+        ProjectFormatException e = assertThrows(ProjectFormatException.class,
+                () -> ProjectReader.parse(json, source, dir));
+        assertEquals(expectedPath, e.path(), () -> "line " + line + ": " + e.getMessage());
+        assertTrue(e.getMessage().contains(fragment),
+                () -> "line " + line + ": message should contain '" + fragment + "' but was: " + e.getMessage());
+        assertTrue(e.getMessage().startsWith(expectedPath + ": "), e.getMessage());
+        assertTrue(e.getMessage().endsWith("(in " + source + ")"), e.getMessage());
+        assertEquals(-1, e.getMessage().indexOf('\n'), "one-line message");
+    }
+
+    @Test
+    void rejectsLoadTableWithMoreThanAMillionDataRows(@TempDir Path dir) throws IOException {
+        assertEquals(1_000_000, ProjectReader.MAX_TABLE_ROWS);
+        // rows of a station the project does not have, skipped: the limit counts them all the same
+        StringBuilder csv = new StringBuilder(7_000_100).append("station,case,N\n");
+        for (int i = 0; i <= ProjectReader.MAX_TABLE_ROWS; i++) {
+            csv.append("Z,G,1\n");
+        }
+        Files.writeString(dir.resolve("loads.csv"), csv);
+        ProjectFormatException e = assertThrows(ProjectFormatException.class,
+                () -> ProjectReader.parse(tableProject(",\"unknownStations\":\"skip\""), "big", dir));
+        assertEquals("$.loadTables[0].file", e.path());
+        assertTrue(e.getMessage().contains("loads.csv has more than 1000000 data rows (the limit; row 1000002)"),
+                e.getMessage());
+    }
+
+    @Test
+    void acceptsLoadTableWithAMillionDataRows(@TempDir Path dir) throws IOException, ProjectFormatException {
+        StringBuilder csv = new StringBuilder(7_000_100).append("station,case,N\nA,G,1\n");
+        for (int i = 1; i < ProjectReader.MAX_TABLE_ROWS; i++) {
+            csv.append("Z,G,1\n");
+        }
+        csv.append("\n,,\n\n");
+        Files.writeString(dir.resolve("loads.csv"), csv);
+        assertEquals(1.0, ProjectReader.parse(tableProject(",\"unknownStations\":\"skip\""), "big", dir)
+                .forces("A", "G").n());
+    }
+
+    @Test
+    void rejectsLoadTableLargerThan64MiBBeforeReadingIt(@TempDir Path dir) throws IOException {
+        assertEquals(64L * 1024 * 1024, ProjectReader.MAX_TABLE_BYTES);
+        try (RandomAccessFile f = new RandomAccessFile(dir.resolve("loads.csv").toFile(), "rw")) {
+            f.setLength(ProjectReader.MAX_TABLE_BYTES + 1); // sparse: only the size may be looked at
+        }
+        ProjectFormatException e = assertThrows(ProjectFormatException.class,
+                () -> ProjectReader.parse(tableProject(""), "big", dir));
+        assertEquals("$.loadTables[0].file", e.path());
+        assertTrue(e.getMessage().contains("'loads.csv' is 67108865 bytes or more, over the limit of 67108864 bytes "
+                + "(64 MiB)"), e.getMessage());
+    }
+
+    @Test
+    void rejectsOverlongCsvField(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("loads.csv"), "station,case,N\nA,G,\"" + "1".repeat(10_001) + "\"\n");
+        ProjectFormatException e = assertThrows(ProjectFormatException.class,
+                () -> ProjectReader.parse(tableProject(""), "long", dir));
+        assertEquals("$.loadTables[0].file", e.path());
+        assertTrue(e.getMessage().contains("loads.csv row 2: a field longer than 10000 characters"), e.getMessage());
+    }
+
+    @Test
+    void rejectsCsvRowWithTooManyFields(@TempDir Path dir) throws IOException {
+        Files.writeString(dir.resolve("loads.csv"), "station,case,N" + ",".repeat(10_000) + "\n");
+        ProjectFormatException e = assertThrows(ProjectFormatException.class,
+                () -> ProjectReader.parse(tableProject(""), "wide", dir));
+        assertTrue(e.getMessage().contains("loads.csv row 1: more than 10000 fields in one row"), e.getMessage());
+    }
+
+    /** A project with station A (no forces of its own) and one table loads.csv, extra entry members appended. */
+    private static String tableProject(String members) {
+        return PREFIX + "\"sections\":{\"s\":{\"material\":\"m\",\"profile\":{\"type\":\"CircleProfile\","
+                + "\"radius\":25}}},\"stations\":{\"A\":{\"section\":\"s\"}},\"loadTables\":[{\"file\":"
+                + "\"loads.csv\"" + members + "}]}";
     }
 
     @Test

@@ -18,12 +18,14 @@ import com.google.gson.JsonParser;
 import org.junit.jupiter.api.Test;
 import org.tensio.engine.loads.ForceComponent;
 import org.tensio.engine.profile.ProfileTypes;
+import org.tensio.engine.section.Criterion;
 import org.tensio.engine.units.UnitSystem;
 
 /**
  * docs/tensio-project.schema.json agrees with the engine: profile types and their parameters (from
- * {@link ProfileTypes}), units, force components. Structure and ranges of the schema itself were checked
- * with a draft 2020-12 validator against the examples when it was written.
+ * {@link ProfileTypes}), units, force components, the keys the reader accepts at each level, material
+ * criteria ({@link Criterion}) and the load-table options. Structure and ranges of the schema itself were
+ * checked with a draft 2020-12 validator (python-jsonschema 4.26) against the examples when it was written.
  */
 class SchemaConsistencyTest {
 
@@ -61,6 +63,55 @@ class SchemaConsistencyTest {
                         type + "." + zeroOnly + " must be declared as const 0");
             }
         }
+    }
+
+    private static Set<String> keys(JsonObject def) {
+        return new java.util.TreeSet<>(def.getAsJsonObject("properties").keySet());
+    }
+
+    @Test
+    void objectKeysMatchTheReader() throws IOException {
+        JsonObject schema = schema();
+        JsonObject defs = schema.getAsJsonObject("$defs");
+        assertEquals(new java.util.TreeSet<>(ProjectReader.ROOT_KEYS), keys(schema));
+        assertEquals(new java.util.TreeSet<>(ProjectReader.MATERIAL_KEYS), keys(defs.getAsJsonObject("material")));
+        assertEquals(new java.util.TreeSet<>(ProjectReader.ALLOWABLE_KEYS),
+                keys(defs.getAsJsonObject("material").getAsJsonObject("properties").getAsJsonObject("allowable")));
+        assertEquals(new java.util.TreeSet<>(ProjectReader.STATION_KEYS), keys(defs.getAsJsonObject("station")));
+        assertEquals(List.of("section"), strings(defs.getAsJsonObject("station").get("required")));
+        assertEquals(new java.util.TreeSet<>(ProjectReader.LOAD_TABLE_KEYS), keys(defs.getAsJsonObject("loadTable")));
+        assertEquals(List.of("file"), strings(defs.getAsJsonObject("loadTable").get("required")));
+    }
+
+    @Test
+    void criteriaMatchTheEngine() throws IOException {
+        JsonObject criteria = schema().getAsJsonObject("$defs").getAsJsonObject("material")
+                .getAsJsonObject("properties").getAsJsonObject("criteria");
+        List<String> names = new ArrayList<>();
+        for (Criterion c : Criterion.values()) {
+            names.add(c.name());
+        }
+        assertEquals(names, strings(criteria.getAsJsonObject("items").get("enum")));
+        assertEquals(List.of("vonMises"), strings(criteria.get("default")));
+    }
+
+    @Test
+    void loadTableOptionsMatchTheReader() throws IOException {
+        JsonObject table = schema().getAsJsonObject("$defs").getAsJsonObject("loadTable").getAsJsonObject("properties");
+        assertEquals(LoadTableReader.COLUMN_KEYS, List.copyOf(table.getAsJsonObject("columns")
+                .getAsJsonObject("properties").keySet()));
+        List<String> components = new ArrayList<>();
+        for (ForceComponent c : ForceComponent.values()) {
+            components.add(c.key());
+        }
+        assertEquals(components, List.copyOf(table.getAsJsonObject("scale").getAsJsonObject("properties").keySet()));
+        JsonObject units = table.getAsJsonObject("units").getAsJsonObject("properties");
+        assertEquals(UnitSystem.LENGTHS, strings(units.getAsJsonObject("length").get("enum")));
+        assertEquals(UnitSystem.FORCES, strings(units.getAsJsonObject("force").get("enum")));
+        assertEquals(ProjectReader.DELIMITERS, strings(table.getAsJsonObject("delimiter").get("enum")));
+        assertEquals(ProjectReader.DECIMAL_SEPARATORS, strings(table.getAsJsonObject("decimalSeparator").get("enum")));
+        assertEquals(ProjectReader.UNKNOWN_STATIONS, strings(table.getAsJsonObject("unknownStations").get("enum")));
+        assertEquals(ProjectReader.MAX_TABLE_ROWS, table.getAsJsonObject("headerRow").get("maximum").getAsInt());
     }
 
     @Test
