@@ -102,7 +102,6 @@ public final class CheckOp {
                 continue;
             }
             UnitStressField f = fields.of(section);
-            warnings.addAll(f.warnings());
             int n = f.size();
             int[] mat = new int[n];
             List<String> keys = new ArrayList<>(checked.keySet());
@@ -116,6 +115,9 @@ public final class CheckOp {
                 InternalForces forces = project.forces(st.id(), caseId);
                 f.evaluate(forces, s, tx, ty);
                 boolean shear = forces.t() != 0 || forces.vx() != 0 || forces.vy() != 0;
+                if (forces.vx() != 0 || forces.vy() != 0) {
+                    warnings.addAll(f.warnings()); // the method notes concern the shear from Vx, Vy
+                }
                 for (int k = 0; k < keys.size(); k++) {
                     MaterialLimits lim = checked.get(keys.get(k));
                     for (Criterion c : lim.criteria()) {

@@ -70,7 +70,6 @@ public final class EnvelopeOp {
         Section section = project.section(station.sectionId());
         UnitStressField f = fields.of(section);
         Set<String> warnings = new LinkedHashSet<>(warn);
-        warnings.addAll(f.warnings());
         int n = f.size();
         // running extremes and the index of the case giving each: σz, τzx, τzy max/min; von Mises, τmax max
         double[][] hi = new double[3][n], lo = new double[3][n];
@@ -83,6 +82,9 @@ public final class EnvelopeOp {
         int[] fHiCase = new int[comps.length], fLoCase = new int[comps.length];
         for (int k = 0; k < cases.size(); k++) {
             InternalForces forces = project.forces(station.id(), cases.get(k));
+            if (forces.vx() != 0 || forces.vy() != 0) {
+                warnings.addAll(f.warnings()); // the method notes concern the shear from Vx, Vy
+            }
             for (int c = 0; c < comps.length; c++) {
                 double v = forces.get(comps[c]);
                 if (k == 0 || v > fHi[c]) {
