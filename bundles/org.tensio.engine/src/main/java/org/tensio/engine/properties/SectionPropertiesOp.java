@@ -74,7 +74,7 @@ public final class SectionPropertiesOp {
             angle += 180;
         }
         Bounds b = section.bounds();
-        // round-off below 1e-12 of the section's size or stiffness is reported as exactly zero
+        // round-off below 1e-14 of the section's size or stiffness (a few dozen ulps) is reported as exactly zero
         double size = b.diagonal();
         double xc = snap(xcl + ox, size), yc = snap(ycl + oy, size);
         ixy = snap(ixy, Math.sqrt(Math.abs(ixx * iyy)));
@@ -90,9 +90,9 @@ public final class SectionPropertiesOp {
                 tor == null ? null : 0.0, tor == null ? null : tor.source, b.minX(), b.minY(), b.maxX(), b.maxY());
     }
 
-    /** @return 0 when |v| is below 1e-12 of {@code scale}, else v */
+    /** @return 0 when |v| is below 1e-14 of {@code scale}, else v */
     static double snap(double v, double scale) {
-        return Math.abs(v) < 1e-12 * scale ? 0.0 : v;
+        return Math.abs(v) < 1e-14 * scale ? 0.0 : v;
     }
 
     /** Bisection for the equal-area axis, local frame; {@code horizontal} for the axis parallel to x. */

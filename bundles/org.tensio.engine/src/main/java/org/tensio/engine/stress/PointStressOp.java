@@ -173,7 +173,7 @@ public final class PointStressOp {
     }
 
     /**
-     * Contributions below 1e-12 of the largest of their kind at the point (normal or shear) are round-off:
+     * Contributions below 1e-13 of the largest of their kind at the point (normal or shear) are round-off:
      * report them as zero.
      */
     private static void snapRoundOff(Map<ForceComponent, StressComponents> contrib) {
@@ -182,7 +182,7 @@ public final class PointStressOp {
             maxS = Math.max(maxS, Math.abs(c.sigmaZ()));
             maxT = Math.max(maxT, Math.max(Math.abs(c.tauZX()), Math.abs(c.tauZY())));
         }
-        double es = 1e-12 * maxS, et = 1e-12 * maxT;
+        double es = 1e-13 * maxS, et = 1e-13 * maxT;
         for (Map.Entry<ForceComponent, StressComponents> e : contrib.entrySet()) {
             StressComponents c = e.getValue();
             e.setValue(new StressComponents(Math.abs(c.sigmaZ()) < es ? 0 : c.sigmaZ(),
