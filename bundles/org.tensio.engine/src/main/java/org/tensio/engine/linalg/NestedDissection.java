@@ -32,6 +32,18 @@ final class NestedDissection {
     private final int[] levelStart;
     private final int[] local;
     private double[] keys;
+    /** Largest |Δx|, |Δy| from each node to a neighbour: nodes farther than that from a cut have no cut edge. */
+    private final double[] reachX;
+    private final double[] reachY;
+    /** Where the last split's cut edges can be: position ranges of candidate nodes, and a key filter. */
+    private int scanA0;
+    private int scanA1;
+    private int scanB0;
+    private int scanB1;
+    private double[] cutKey;
+    private double[] cutReach;
+    private double maxKeyA;
+    private double minKeyB;
 
     NestedDissection(SymmetricCsr a, double[] x, double[] y, int leafSize) {
         this.n = a.n();
@@ -50,6 +62,23 @@ final class NestedDissection {
         for (int i = 0; i < n; i++) {
             nodes[i] = i;
         }
+        if (x != null) {
+            reachX = new double[n];
+            reachY = new double[n];
+            for (int v = 0; v < n; v++) {
+                double rx = 0;
+                double ry = 0;
+                for (int p = rs[v]; p < rs[v + 1]; p++) {
+                    rx = Math.max(rx, Math.abs(x[ci[p]] - x[v]));
+                    ry = Math.max(ry, Math.abs(y[ci[p]] - y[v]));
+                }
+                reachX[v] = rx;
+                reachY[v] = ry;
+            }
+        } else {
+            reachX = null;
+            reachY = null;
+        }
     }
 
     int[] order() {
@@ -65,6 +94,7 @@ final class NestedDissection {
             orderLeaf(lo, hi);
             return;
         }
+        cutKey = null;
         int mid = x != null ? coordinateSplit(lo, hi) : graphSplit(lo, hi);
         if (mid <= lo || mid >= hi) {
             orderLeaf(lo, hi);
@@ -116,16 +146,16 @@ final class NestedDissection {
         int nb = 0;
         int[] sa = new int[Math.max(1, mid - lo)];
         int[] sb = new int[Math.max(1, hi - mid)];
-        for (int t = lo; t < mid; t++) {
+        for (int t = scanA0; t < scanA1; t++) {
             int v = nodes[t];
-            if (adjacentTo(v, tagB)) {
+            if ((cutKey == null || cutKey[v] + cutReach[v] >= minKeyB) && adjacentTo(v, tagB)) {
                 local[v] = na;
                 sa[na++] = v;
             }
         }
-        for (int t = mid; t < hi; t++) {
+        for (int t = scanB0; t < scanB1; t++) {
             int v = nodes[t];
-            if (adjacentTo(v, tagA)) {
+            if ((cutKey == null || cutKey[v] - cutReach[v] <= maxKeyA) && adjacentTo(v, tagA)) {
                 local[v] = nb;
                 sb[nb++] = v;
             }
@@ -313,6 +343,24 @@ final class NestedDissection {
             }
         }
         System.arraycopy(scratch, 0, nodes, lo, size);
+        double mA = Double.NEGATIVE_INFINITY;
+        double mB = Double.POSITIVE_INFINITY;
+        for (int t = 0; t < size; t++) {
+            double k = c[scratch[t]];
+            if (t < nA) {
+                mA = Math.max(mA, k);
+            } else {
+                mB = Math.min(mB, k);
+            }
+        }
+        cutKey = c;
+        cutReach = c == x ? reachX : reachY;
+        maxKeyA = mA;
+        minKeyB = mB;
+        scanA0 = lo;
+        scanA1 = lo + nA;
+        scanB0 = lo + nA;
+        scanB1 = hi;
         return lo + nA;
     }
 
@@ -402,6 +450,11 @@ final class NestedDissection {
             }
         }
         System.arraycopy(queue, 0, nodes, lo, size);
+        // cut edges join only the last level of the first half and the first level of the second
+        scanA0 = lo + levelStart[bestLevel];
+        scanA1 = lo + levelStart[bestLevel + 1];
+        scanB0 = scanA1;
+        scanB1 = lo + levelStart[bestLevel + 2];
         return lo + levelStart[bestLevel + 1];
     }
 
@@ -439,6 +492,10 @@ final class NestedDissection {
             // the first components fill more than half: cut after the first component instead
             mid = firstComponentEnd(lo, hi, seg);
         }
+        scanA0 = lo; // no edge between components: nothing to scan
+        scanA1 = lo;
+        scanB0 = lo;
+        scanB1 = lo;
         return lo + mid;
     }
 
@@ -493,7 +550,8 @@ final class NestedDissection {
     /**
      * Minimum degree on the leaf's elimination graph held as bit sets, where the degree also counts the leaf's
      * neighbours outside it (ancestor separator nodes, eliminated later): nodes touching a separator are thus
-     * eliminated late, which keeps fill inside the leaf. Ties go to the earlier node of the segment.
+     * eliminated late, which keeps fill inside the leaf. Degrees live in bucket lists, so a leaf of k nodes costs
+     * O(k·(k + h)/64 · degree) for h halo nodes; ties go to the node most recently moved into the bucket.
      */
     private void orderLeaf(int lo, int hi) {
         int k = hi - lo;
@@ -533,21 +591,28 @@ final class NestedDissection {
             }
             deg[t] = popcount(bits, base, words);
         }
+        // degree buckets: doubly linked lists, most recently inserted first
+        int maxDeg = k + h;
+        int[] head = new int[maxDeg + 1];
+        java.util.Arrays.fill(head, -1);
+        int[] next = new int[k];
+        int[] prev = new int[k];
+        for (int t = k - 1; t >= 0; t--) {
+            link(t, deg[t], head, next, prev);
+        }
         boolean[] done = new boolean[k];
         int[] order = new int[k];
+        int leafWords = (k + 63) >>> 6;
+        int minDeg = 0;
         for (int step = 0; step < k; step++) {
-            int a = -1;
-            int best = Integer.MAX_VALUE;
-            for (int t = 0; t < k; t++) {
-                if (!done[t] && deg[t] < best) {
-                    best = deg[t];
-                    a = t;
-                }
+            while (head[minDeg] < 0) {
+                minDeg++;
             }
+            int a = head[minDeg];
+            unlink(a, deg[a], head, next, prev);
             done[a] = true;
             order[step] = nodes[lo + a];
             int baseA = a * words;
-            int leafWords = (k + 63) >>> 6;
             for (int wd = 0; wd < leafWords; wd++) {
                 long m = bits[baseA + wd];
                 while (m != 0) {
@@ -562,11 +627,38 @@ final class NestedDissection {
                     }
                     bits[baseB + (b >>> 6)] &= ~(1L << b);
                     bits[baseB + (a >>> 6)] &= ~(1L << a);
-                    deg[b] = popcount(bits, baseB, words);
+                    int d = popcount(bits, baseB, words);
+                    if (d != deg[b]) {
+                        unlink(b, deg[b], head, next, prev);
+                        deg[b] = d;
+                        link(b, d, head, next, prev);
+                    }
                 }
             }
+            // eliminating a removes one neighbour from each of its neighbours: the minimum drops by at most one
+            minDeg = Math.max(0, minDeg - 1);
         }
         System.arraycopy(order, 0, nodes, lo, k);
+    }
+
+    private static void link(int t, int d, int[] head, int[] next, int[] prev) {
+        next[t] = head[d];
+        prev[t] = -1;
+        if (head[d] >= 0) {
+            prev[head[d]] = t;
+        }
+        head[d] = t;
+    }
+
+    private static void unlink(int t, int d, int[] head, int[] next, int[] prev) {
+        if (prev[t] >= 0) {
+            next[prev[t]] = next[t];
+        } else {
+            head[d] = next[t];
+        }
+        if (next[t] >= 0) {
+            prev[next[t]] = prev[t];
+        }
     }
 
     private static int popcount(long[] bits, int base, int words) {
