@@ -10,11 +10,11 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code tensio demo}: runs {@code properties} on the bundled demo project and {@code stress} at the points the
- * demo tour lists, printing readable results.
+ * {@code tensio demo}: runs {@code properties} on the bundled demo project, {@code stress} at the points the
+ * demo tour lists and {@code check} on the whole project, printing readable results.
  */
 @Command(name = "demo", mixinStandardHelpOptions = true,
-        description = "Run properties and stress on the bundled demo project (a fictitious grain-dryer conveyor).")
+        description = "Run properties, stress and check on the bundled demo project (a fictitious grain-dryer conveyor).")
 final class DemoCommand implements Callable<Integer> {
 
     @Spec
@@ -46,6 +46,11 @@ final class DemoCommand implements Callable<Integer> {
                 return code;
             }
         }
-        return Main.OK;
+        out.println();
+        out.println("$ tensio check " + demo.getFileName());
+        code = Main.execute(out, err, "check", demo.toString());
+        out.println();
+        out.println("(tensio check FILE --report DIR writes the signed HTML and PDF report.)");
+        return code == Main.BAD_INPUT ? code : Main.OK;
     }
 }
