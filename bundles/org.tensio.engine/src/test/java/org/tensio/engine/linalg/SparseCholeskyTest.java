@@ -165,6 +165,28 @@ class SparseCholeskyTest {
     }
 
     @Test
+    void failureInAParallelSubtreeIsReportedAsItself() {
+        Meshes.Mesh m = Meshes.p2Square(60, 0.2, 41);
+        int bad = 4321;
+        SparseMatrixBuilder b = new SparseMatrixBuilder(m.n(), Input.ONE_TRIANGLE);
+        SymmetricCsr a = m.a();
+        for (int i = 0; i < m.n(); i++) {
+            for (int p = a.rowStart()[i]; p < a.rowStart()[i + 1]; p++) {
+                if (a.columns()[p] <= i) {
+                    b.add(i, a.columns()[p], a.values()[p]);
+                }
+            }
+        }
+        b.add(bad, bad, -2 * a.get(bad, bad)); // flip the sign of one diagonal entry
+        SymmetricCsr flipped = b.build();
+        SparseCholesky.Options opt = SparseCholesky.Options.defaults().withParallelism(2);
+        NotPositiveDefiniteException e = assertThrows(NotPositiveDefiniteException.class,
+                () -> SparseCholesky.factor(flipped, new int[] {0}, Ordering.automatic(flipped, m.x(), m.y()), opt));
+        assertEquals(bad, e.unknown());
+        assertEquals(-a.get(bad, bad), e.diagonal(), 0);
+    }
+
+    @Test
     void missingOrNegativeDiagonalIsRejected() {
         SparseMatrixBuilder b = new SparseMatrixBuilder(3, Input.ONE_TRIANGLE);
         b.add(0, 0, 2);
