@@ -24,6 +24,9 @@ final class CholeskyNumeric {
     /** Fronts whose update work exceeds this split their rows between threads. */
     private static final double PARALLEL_FRONT_WORK = 2e6;
     private static final int MAX_FORK_DEPTH = 48;
+    /** Diagonal blocks with at least this many columns are factored in parallel panels of PANEL rows. */
+    private static final int PARALLEL_DIAGONAL_COLUMNS = 192;
+    private static final int PANEL = 64;
     private static final int POLL_COLUMNS = 2048;
     private static final double POLL_WORK = 2e8;
 
@@ -230,7 +233,9 @@ final class CholeskyNumeric {
         double[] ratio = {Double.POSITIVE_INFINITY};
         double[] dg = new double[k];
         System.arraycopy(diag, f, dg, 0, k);
-        int bad = DenseKernels.factorDiagonal(l, k, inv, dg, tol, piv, ratio);
+        int bad = pool != null && k >= PARALLEL_DIAGONAL_COLUMNS
+                ? parallelDiagonal(l, k, inv, dg, piv, ratio)
+                : DenseKernels.factorDiagonal(l, k, inv, dg, tol, piv, ratio);
         if (bad >= 0) {
             int col = f + bad;
             throw new NotPositiveDefiniteException(sym.perm[col], col, piv[0], piv[1], tol);
@@ -249,6 +254,45 @@ final class CholeskyNumeric {
         blocks[s] = l;
         progress(k, sym.work[s], ratio[0]);
         return u;
+    }
+
+    /**
+     * The diagonal block in panels of {@value #PANEL} rows: the columns left of a panel are independent between its
+     * row groups and are computed in parallel, the triangle of the panel sequentially; the same arithmetic per
+     * entry as {@link DenseKernels#factorDiagonal}.
+     */
+    private int parallelDiagonal(double[] l, int k, double[] inv, double[] dg, double[] piv, double[] ratio) {
+        for (int p0 = 0; p0 < k; p0 += PANEL) {
+            int p1 = Math.min(p0 + PANEL, k);
+            if (p0 > 0) {
+                int groups = (p1 - p0 + 3) / 4;
+                int tasks = Math.min(groups, 2 * threads);
+                List<RecursiveAction> list = new ArrayList<>();
+                for (int t = 0; t < tasks; t++) {
+                    int r0 = p0 + 4 * (groups * t / tasks);
+                    int r1 = Math.min(p1, p0 + 4 * (groups * (t + 1) / tasks));
+                    int cEnd = p0;
+                    list.add(new RecursiveAction() {
+                        private static final long serialVersionUID = 1L;
+
+                        @Override
+                        protected void compute() {
+                            DenseKernels.solveRange(l, k, inv, r0, r1, 0, cEnd);
+                        }
+                    });
+                }
+                ForkJoinTask.invokeAll(list);
+            }
+            for (int g0 = p0; g0 < p1; g0 += 4) {
+                int g1 = Math.min(g0 + 4, k);
+                DenseKernels.solveRange(l, k, inv, g0, g1, p0, g0);
+                int bad = DenseKernels.factorTriangle(l, k, inv, g0, g1, dg, tol, piv, ratio);
+                if (bad >= 0) {
+                    return bad;
+                }
+            }
+        }
+        return -1;
     }
 
     private void parallelRows(double[] l, int k, double[] inv, double[] u, int p, boolean panel) {

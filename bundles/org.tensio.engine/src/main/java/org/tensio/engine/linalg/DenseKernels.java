@@ -20,55 +20,82 @@ final class DenseKernels {
     /**
      * Cholesky factor of the k × k diagonal block (rows 0 … k−1 of L) in place; writes 1/L<sub>cc</sub> into
      * inv[c]. Returns −1 on success or the local column of the first pivot d with !(d &gt; tol·diag[c]) (d and
-     * diag are then in pivotOut[0], pivotOut[1]).
+     * diag are then in pivotOut[0], pivotOut[1]). Row groups of four are processed in order: first their columns
+     * left of the group ({@link #solveRange}), then the small triangle with the pivots ({@link #factorTriangle}).
      */
     static int factorDiagonal(double[] l, int k, double[] inv, double[] diag, double tol, double[] pivotOut,
             double[] minRatio) {
-        for (int r0 = 0; r0 < k; r0 += 4) {
-            int r1 = Math.min(r0 + 4, k);
-            if (r1 - r0 == 4) {
-                solveRows4(l, k, inv, r0, r0);
+        for (int g0 = 0; g0 < k; g0 += 4) {
+            int g1 = Math.min(g0 + 4, k);
+            solveRange(l, k, inv, g0, g1, 0, g0);
+            int bad = factorTriangle(l, k, inv, g0, g1, diag, tol, pivotOut, minRatio);
+            if (bad >= 0) {
+                return bad;
+            }
+        }
+        return -1;
+    }
+
+    /**
+     * Rows r0 … r1−1 of the diagonal block, columns cStart … cEnd−1 (cEnd ≤ r0), against the already factored rows
+     * above: row groups of four start at multiples of 4 and cStart is a multiple of 4, so every entry is computed by
+     * the same column pair with the same arithmetic however the columns are split into ranges — the parallel panel
+     * schedule of the factorisation is therefore bit-identical to {@link #factorDiagonal}.
+     */
+    static void solveRange(double[] l, int k, double[] inv, int r0, int r1, int cStart, int cEnd) {
+        for (int g = r0; g < r1; g += 4) {
+            int g1 = Math.min(g + 4, r1);
+            if (g1 - g == 4) {
+                solveRows4(l, k, inv, g, cStart, cEnd);
             } else {
-                for (int r = r0; r < r1; r++) {
-                    solveRow(l, k, inv, r, r0);
+                for (int r = g; r < g1; r++) {
+                    solveRow(l, k, inv, r, cStart, cEnd);
                 }
             }
-            for (int r = r0; r < r1; r++) {
-                int rr = r * k;
-                for (int c = r0; c < r; c++) {
-                    int rc = c * k;
-                    double s = l[rr + c];
-                    for (int j = 0; j < c; j++) {
-                        s -= l[rr + j] * l[rc + j];
-                    }
-                    l[rr + c] = s * inv[c];
+        }
+    }
+
+    /**
+     * Rows g0 … g1−1 (one group of at most four) of the diagonal block: the entries left of the diagonal inside
+     * the group, then the pivots, each checked against tol·diag. Returns −1 or the failing local column.
+     */
+    static int factorTriangle(double[] l, int k, double[] inv, int g0, int g1, double[] diag, double tol,
+            double[] pivotOut, double[] minRatio) {
+        for (int r = g0; r < g1; r++) {
+            int rr = r * k;
+            for (int c = g0; c < r; c++) {
+                int rc = c * k;
+                double s = l[rr + c];
+                for (int j = 0; j < c; j++) {
+                    s -= l[rr + j] * l[rc + j];
                 }
-                double d = l[rr + r];
-                double d0 = 0;
-                double d1 = 0;
-                int j = 0;
-                for (; j + 1 < r; j += 2) {
-                    d0 += l[rr + j] * l[rr + j];
-                    d1 += l[rr + j + 1] * l[rr + j + 1];
-                }
-                for (; j < r; j++) {
-                    d0 += l[rr + j] * l[rr + j];
-                }
-                d -= d0 + d1;
-                double a = diag[r];
-                if (!(d > tol * Math.abs(a)) || !(a > 0)) {
-                    pivotOut[0] = d;
-                    pivotOut[1] = a;
-                    return r;
-                }
-                double ratio = d / a;
-                if (ratio < minRatio[0]) {
-                    minRatio[0] = ratio;
-                }
-                double sq = Math.sqrt(d);
-                l[rr + r] = sq;
-                inv[r] = 1 / sq;
+                l[rr + c] = s * inv[c];
             }
+            double d = l[rr + r];
+            double d0 = 0;
+            double d1 = 0;
+            int j = 0;
+            for (; j + 1 < r; j += 2) {
+                d0 += l[rr + j] * l[rr + j];
+                d1 += l[rr + j + 1] * l[rr + j + 1];
+            }
+            for (; j < r; j++) {
+                d0 += l[rr + j] * l[rr + j];
+            }
+            d -= d0 + d1;
+            double a = diag[r];
+            if (!(d > tol * Math.abs(a)) || !(a > 0)) {
+                pivotOut[0] = d;
+                pivotOut[1] = a;
+                return r;
+            }
+            double ratio = d / a;
+            if (ratio < minRatio[0]) {
+                minRatio[0] = ratio;
+            }
+            double sq = Math.sqrt(d);
+            l[rr + r] = sq;
+            inv[r] = 1 / sq;
         }
         return -1;
     }
@@ -81,20 +108,23 @@ final class DenseKernels {
     static void solvePanel(double[] l, int k, double[] inv, int r0, int r1) {
         int r = r0;
         for (; r + 3 < r1; r += 4) {
-            solveRows4(l, k, inv, r, k);
+            solveRows4(l, k, inv, r, 0, k);
         }
         for (; r < r1; r++) {
-            solveRow(l, k, inv, r, k);
+            solveRow(l, k, inv, r, 0, k);
         }
     }
 
-    /** Four consecutive rows r … r+3, columns 0 … cEnd−1 (cEnd even or not), against rows c &lt; cEnd. */
-    private static void solveRows4(double[] l, int k, double[] inv, int r, int cEnd) {
+    /**
+     * Four consecutive rows r … r+3, columns cStart … cEnd−1 (cStart even; cEnd even or not), each against the row
+     * of its column: L[r][c] = (A[r][c] − L[r][0:c]·L[c][0:c]) / L[c][c], in column pairs.
+     */
+    private static void solveRows4(double[] l, int k, double[] inv, int r, int cStart, int cEnd) {
         int ra0 = r * k;
         int ra1 = ra0 + k;
         int ra2 = ra1 + k;
         int ra3 = ra2 + k;
-        int c = 0;
+        int c = cStart;
         for (; c + 1 < cEnd; c += 2) {
             int rc0 = c * k;
             int rc1 = rc0 + k;
@@ -149,10 +179,10 @@ final class DenseKernels {
         }
     }
 
-    /** One row r, columns 0 … cEnd−1, same arithmetic grouping per column pair as {@link #solveRows4}. */
-    private static void solveRow(double[] l, int k, double[] inv, int r, int cEnd) {
+    /** One row r, columns cStart … cEnd−1; per entry the same arithmetic as {@link #solveRows4}. */
+    private static void solveRow(double[] l, int k, double[] inv, int r, int cStart, int cEnd) {
         int ra = r * k;
-        int c = 0;
+        int c = cStart;
         for (; c + 1 < cEnd; c += 2) {
             int rc0 = c * k;
             int rc1 = rc0 + k;
