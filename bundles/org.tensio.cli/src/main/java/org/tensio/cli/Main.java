@@ -12,7 +12,7 @@ import picocli.CommandLine.Command;
 @Command(name = "tensio", mixinStandardHelpOptions = true, versionProvider = Version.class,
         description = "Cross-section properties and stresses for shafts, beams and columns.%n"
                 + "Results support, not replace, a competent engineer's review; local codes and licensed practice govern.",
-        subcommands = {PropertiesCommand.class, StressCommand.class, CheckCommand.class, EnvelopeCommand.class, DemoCommand.class})
+        subcommands = {PropertiesCommand.class, StressCommand.class, CheckCommand.class, EnvelopeCommand.class, DemoCommand.class, VerifyCommand.class})
 public final class Main implements Runnable {
 
     /** Exit code: success. */
