@@ -30,7 +30,7 @@ import org.tensio.engine.section.Section;
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
 @Warmup(iterations = 2, time = 2)
-@Measurement(iterations = 3, time = 2)
+@Measurement(iterations = 5, time = 2)
 @Fork(value = 1, jvmArgsAppend = {"-Xmx8g"})
 public class SectionPathBenchmark {
 

@@ -48,7 +48,7 @@ import org.tensio.engine.linalg.SymmetricCsr;
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
 @Warmup(iterations = 2, time = 2)
-@Measurement(iterations = 3, time = 2)
+@Measurement(iterations = 5, time = 2)
 @Fork(value = 1, jvmArgsAppend = {"-Xmx8g"})
 public class SparseSolveBenchmark {
 
@@ -290,7 +290,7 @@ public class SparseSolveBenchmark {
         Ordering ordering = null;
         DMatrixSparseCSC a = s.a;
         DMatrixRMaj b = s.b.copy();
-        if (a == null) {
+        if (a == null) { // TENSIO_ND: order and permute inside the timed call
             ordering = Ordering.automatic(s.tensio, s.p.x, s.p.y);
             a = symmetricCsc(s.p, ordering);
             for (int k = 0; k < n; k++) {

@@ -30,7 +30,10 @@ import org.tensio.engine.section.SectionPart;
  */
 final class WarpingProblem {
 
-    /** Nodes per element of the engine's P2 meshes, measured: nodeCount / elementCount ≈ 2. */
+    /**
+     * Nodes per requested element of the engine's P2 meshes of this section: nodeCount / targetElements measured
+     * 2.08, 2.00, 2.01 at 5 000, 50 000, 200 000 elements.
+     */
     static final double NODES_PER_ELEMENT = 2.0;
 
     /** The benchmarked section. */
