@@ -225,6 +225,17 @@ public final class UnitStressField {
         }
     }
 
+    /**
+     * The envelope kernel over these samples ({@link EnvelopeKernel}: many cases at machine speed), reading this
+     * field's nine coefficient arrays in place: no copy is made and the kernel never writes them. Kernel point i
+     * is sample i; a1..a3 are σz per unit N, Mx, My, b1..b3 τzx and c1..c3 τzy per unit T, Vx, Vy.
+     *
+     * @return a new kernel (cheap: one pass over the arrays to check they are finite)
+     */
+    public EnvelopeKernel envelopeKernel() {
+        return new EnvelopeKernel(sN, sMx, sMy, tTx, tVxX, tVyX, tTy, tVxY, tVyY);
+    }
+
     /** Collects the samples. */
     private static final class Builder {
         final Section section;
