@@ -1,0 +1,23 @@
+package org.tensio.ui.selection;
+
+import java.nio.file.Path;
+import java.util.Objects;
+
+/**
+ * A station of a project (and optionally one of its load cases or combinations), as the results tree
+ * publishes it through the workbench selection service when a station or case node is selected. The
+ * section editor shows that station's section. Immutable.
+ *
+ * @param project   the project file (absolute, normalised)
+ * @param stationId the station id
+ * @param caseId    the load case or combination, or {@code null}
+ * @since 0.1
+ */
+public record StationRef(Path project, String stationId, String caseId) {
+
+    /** Checks the file and the station id. */
+    public StationRef {
+        Objects.requireNonNull(project, "project");
+        Objects.requireNonNull(stationId, "stationId");
+    }
+}
