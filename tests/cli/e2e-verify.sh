@@ -51,7 +51,7 @@ import json,sys,zipfile
 z=zipfile.ZipFile(sys.argv[1]); names=set(z.namelist())
 for f in "closed-form rolled-section-table torsion thin-walled shear elementary-shear combined-loading unsymmetric-bending".split():
     assert "verification/%s.txt"%f in names, f
-mf=z.read("META-INF/MANIFEST.MF").decode()
+mf=z.read("META-INF/MANIFEST.MF").decode().replace("\r\n ", "").replace("\n ", "")  # unfold 72-column continuation lines
 ver=[l.split(":",1)[1].strip() for l in mf.splitlines() if l.startswith("Bundle-Version:")][0]
 assert json.load(open(sys.argv[2]))["engineVersion"]==ver, ver
 assert "org.tensio.engine.verification" in mf

@@ -38,7 +38,7 @@ public record NotchFactors(Notch notch, double kt, double ktAxial, double kts, d
         double kts = firstPassKts ? n.type().firstPassKts() : n.kts();
         double kta = n.ktAxial() != null ? n.ktAxial() : kt;
         String ktSource = (firstPassKt || firstPassKts ? "first-pass " + (firstPassKt ? "Kt" : "")
-                + (firstPassKt && firstPassKts ? " and " : "") + (firstPassKts ? "Kts" : "") + " for a "
+                + (firstPassKt && firstPassKts ? " and " : "") + (firstPassKts ? "Kts" : "") + " for the type "
                 + n.type().description() + " (Shigley's Mechanical Engineering Design, 9th/10th ed., Table 7-1, from"
                 + " memory)" : "Kt and Kts given")
                 + (n.ktAxial() == null ? "; axial Kt = bending Kt (common practice, no source)" : "; axial Kt given");
