@@ -6,22 +6,7 @@
 # Table A.1, from memory): 36 across flats with a 12 bore, A = (√3/2)·36² − π·12²/4 = 1009.2716 mm².
 # Prints one line per check and a closing "e2e-extensions: N passed, N failed" line; exit 1 when any check failed.
 set -u
-here=$(cd "$(dirname "$0")/../.." && pwd)
-tensio="$here/tensio"
-work=$(mktemp -d)
-trap 'rm -rf "$work"' EXIT
-pass=0; fail=0
-ok()   { pass=$((pass+1)); echo "ok   - $1"; }
-bad()  { fail=$((fail+1)); echo "FAIL - $1"; [ -n "${2:-}" ] && sed 's/^/       /' "$2" | head -20; }
-
-run() {
-  local name=$1 want=$2; shift 3
-  "$tensio" "$@" >"$work/out" 2>"$work/err"; local got=$?
-  if [ "$got" = "$want" ]; then return 0; fi
-  echo "       exit $got, wanted $want: tensio $*"; head -5 "$work/err" | sed 's/^/       /'
-  return 1
-}
-py() { python3 -c "$1" "$work/out"; }
+. "$(dirname "$0")/lib.sh"
 
 kit_dir="$here/examples/org.tensio.example.housekit"
 jar=$(ls "$kit_dir"/target/org.tensio.example.housekit-*.jar 2>/dev/null | grep -v -- '-sources' | head -n 1)
@@ -72,5 +57,4 @@ then ok "report: contributed section x-signOff before the end"; else bad "report
 if run badpath 2 -- check "$project" --extensions "$work/nothing.txt" && grep -q "nothing.txt" "$work/err"; then
   ok "--extensions with a bad path: exit 2 naming it"; else bad "--extensions bad path" "$work/err"; fi
 
-echo "e2e-extensions: $pass passed, $fail failed"
-[ "$fail" -eq 0 ]
+finish e2e-extensions
