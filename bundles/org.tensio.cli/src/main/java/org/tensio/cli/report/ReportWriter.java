@@ -37,6 +37,7 @@ import org.tensio.engine.section.Material;
 import org.tensio.engine.section.MaterialLimits;
 import org.tensio.engine.section.Section;
 import org.tensio.engine.section.SectionPart;
+import org.tensio.engine.service.EngineInfo;
 import org.tensio.engine.service.SectionAnalysisService;
 import org.tensio.engine.stress.PrincipalStresses;
 import org.tensio.engine.stress.StressComponents;
@@ -115,7 +116,7 @@ public final class ReportWriter {
         }
         byte[] input = Files.readAllBytes(projectFile);
         Instant now = Instant.now(clock).truncatedTo(ChronoUnit.SECONDS);
-        String version = EngineVersion.get();
+        String version = EngineInfo.version();
         Meta meta = Meta.of(input, projectFile);
         Doc doc = new Builder(projectFile, p, r, engine, meta, sha256(input), now, version,
                 sections == null ? List.of() : List.copyOf(sections)).build();
