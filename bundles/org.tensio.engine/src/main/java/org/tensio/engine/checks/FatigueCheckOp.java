@@ -41,7 +41,8 @@ import org.tensio.engine.service.SectionAnalysisService;
  * static checks. Each part is multiplied by the fatigue factor of the notches that cover the sample (Kf for
  * bending, Kf,axial for N, Kfs for shear; the largest of each when several notches cover it; 1 where none does).
  * The axial alternating stress is divided by 0.85 for the fatigue criteria (kc = 1 otherwise; Shigley's
- * Mechanical Engineering Design, 9th/10th ed., sec. 6-14, from memory), not for the yield checks. Then
+ * Mechanical Engineering Design, 9th/10th ed., sec. 6-14, from memory), not for the yield checks (their σa' is
+ * that of the actual stresses). Then
  * σa', σm' and σmax' by {@link CycleStress} and the criterion's demand and capacity by
  * {@link FatigueCriterion}. Se per material by {@link EnduranceLimit} with the size factor of
  * {@link EquivalentDiameter}. A tie keeps the first sample in node order.
@@ -135,6 +136,7 @@ public final class FatigueCheckOp {
         }
         List<FatigueCriterion> crit = fs.criteria();
         boolean yieldPeak = crit.contains(FatigueCriterion.firstCycleYield);
+        boolean yieldSum = crit.contains(FatigueCriterion.langer);
         Phase mean = new Phase(loads.mean()), cos = new Phase(loads.cosine()), sin = new Phase(loads.sine());
         int k = crit.size();
         int[] best = new int[k];
@@ -152,21 +154,26 @@ public final class FatigueCheckOp {
             mean.fill(f, i, nf, 1, m);
             cos.fill(f, i, nf, AXIAL_LOAD_FACTOR, c);
             sin.fill(f, i, nf, AXIAL_LOAD_FACTOR, s);
-            double sa = CycleStress.alternating(c, s), sm = CycleStress.mean(m), smax = Double.NaN;
-            if (yieldPeak) {
+            double sa = CycleStress.alternating(c, s), sm = CycleStress.mean(m), smax = Double.NaN, saY = sa;
+            if (yieldPeak || yieldSum) {
+                // the yield checks take the actual stresses: no axial load factor
                 cos.fill(f, i, nf, 1, cy);
                 sin.fill(f, i, nf, 1, sy3);
-                smax = CycleStress.peak(m, cy, sy3)[0];
+                saY = CycleStress.alternating(cy, sy3);
+                if (yieldPeak) {
+                    smax = CycleStress.peak(m, cy, sy3)[0];
+                }
             }
             for (int j = 0; j < k; j++) {
                 FatigueCriterion cr = crit.get(j);
-                double d = cr.demand(sa, sm, smax, se, sut, sy);
+                double a = cr.isFatigueLine() ? sa : saY;
+                double d = cr.demand(a, sm, smax, se, sut, sy);
                 double u = d / cr.capacity(se, sy);
                 if (u > bestU[j]) {
                     bestU[j] = u;
                     bestD[j] = d;
                     best[j] = i;
-                    bestS[j] = new double[] {sa, sm, smax};
+                    bestS[j] = new double[] {a, sm, smax};
                 }
             }
         }

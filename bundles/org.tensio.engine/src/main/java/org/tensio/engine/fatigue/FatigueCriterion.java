@@ -15,6 +15,9 @@ package org.tensio.engine.fatigue;
  * alternating components added with their signs and phases, each amplified by its Kf), capacity Sy;</li>
  * <li>{@link #langer}: the conservative first-cycle yield check n = Sy / (σa' + σm'), capacity Sy.</li>
  * </ul>
+ * For the fatigue lines σa' includes the 1/0.85 of the axial alternating stress (combined loading); the two yield
+ * checks are given the actual stresses.
+ * <p>
  * Source: Shigley's Mechanical Engineering Design, 9th/10th ed., sec. 6-12 (Tables 6-6 to 6-8, fatigue
  * criteria) and sec. 7-4 (shaft design for stress, Eqs. 7-7 to 7-16; equation numbers from memory).
  * Stresses in any one unit; σm' is the von Mises mean stress, ≥ 0 (Shigley's shaft method: compressive means are

@@ -11,7 +11,8 @@ import java.util.List;
  * @param historyText     what the history is
  * @param criterion       the criterion of the result
  * @param stationCriteria every criterion checked at the station (the lines of its fatigue diagram)
- * @param sigmaA          σa', von Mises of the Kf-amplified alternating components
+ * @param sigmaA          σa', von Mises of the Kf-amplified alternating components (for the fatigue lines with the
+ *                        axial alternating stress divided by 0.85; for the yield checks the actual stresses)
  * @param sigmaM          σm', von Mises of the Kf-amplified mean components
  * @param sigmaMax        σmax', largest von Mises stress over the cycle
  * @param factorOfSafety  n = 1/utilisation (+∞ when the demand is 0)

@@ -245,4 +245,59 @@ class ShaftFatigueTest {
         assertEquals(k * 1e5, h1.sigmaA(), 1e-9 * k * 1e5);
         assertEquals(k * 2e5, h1.sigmaM(), 1e-9 * k * 2e5);
     }
+
+    /**
+     * Shigley 9th ed. Example 6-12 (from memory) through the general path, in inches and kips (stresses in ksi):
+     * a 1.5 in bar of cold-drawn 1050 (Sut = 100, Sy = 84 kpsi), machined, axial load from 0 to 16 kip, Kf = 1.85:
+     * Se = 33.9 kpsi with kc = 0.85 (here kc = 1 with the axial alternating stress divided by 0.85, the same
+     * factor of safety), Gerber nf = 3.66, ASME elliptic nf = 3.75, first-cycle yield (Langer) ny = 5.01.
+     * Tolerances: half a unit of the printed last digit, plus 0.18 % for the SI surface constant, plus 0.15 % for
+     * the example's rounded Se and σa.
+     */
+    @Test
+    void shigleyExample6_12AxialThroughTheGeneralPathInKips() throws Exception {
+        Project p = project("""
+                {"tensio": 1, "units": {"length": "in", "force": "kip"},
+                 "materials": {"cd1050": {"E": 30000, "nu": 0.3, "fy": 84, "fu": 100}},
+                 "sections": {"bar": {"material": "cd1050", "profile": {"type": "CircleProfile", "radius": 0.75}}},
+                 "stations": {"end": {"section": "bar", "forces": {"max": {"N": 16}, "min": {"N": 0}}}},
+                 "fatigue": {"materials": {"cd1050": {"estimate": "steel", "surface": "machined"}},
+                   "stations": {"end": {"histories": {"pulsating": {"maximum": "max", "minimum": "min"}},
+                     "criteria": ["fatigueGerber", "fatigueAsmeElliptic", "langer", "firstCycleYield"],
+                     "notches": [{"type": "shoulderFillet", "kf": 1.85, "kfs": 1.85, "kfAxial": 1.85}]}}}}
+                """);
+        CheckReport r = CheckOp.check(p, ENGINE);
+        FatigueDetail g = result(r, "fatigueGerber").fatigue();
+        assertEquals(1.0, g.endurance().factor("kb").value(), 0);
+        assertEquals(33.9, 0.85 * g.se(), 0.05 + 0.0018 * 33.9);
+        double tol = 0.0018 + 0.0015;
+        assertEquals(3.66, g.factorOfSafety(), 0.005 + tol * 3.66);
+        assertEquals(3.75, result(r, "fatigueAsmeElliptic").fatigue().factorOfSafety(), 0.005 + tol * 3.75);
+        assertEquals(5.01, result(r, "langer").fatigue().factorOfSafety(), 0.005 + 0.0015 * 5.01);
+        assertEquals(5.01, result(r, "firstCycleYield").fatigue().factorOfSafety(), 0.005 + 0.0015 * 5.01);
+        // exact: σm = Kf F/2 / A, the alternating one divided by 0.85 for the fatigue lines only
+        double sm = 1.85 * 8 / (Math.PI * 0.75 * 0.75);
+        assertEquals(sm / 0.85, g.sigmaA(), 1e-12 * sm);
+        assertEquals(sm, g.sigmaM(), 1e-12 * sm);
+        assertEquals(sm, result(r, "langer").fatigue().sigmaA(), 1e-12 * sm);
+    }
+
+    /** An overloaded shaft fails its fatigue check: the report is not passed and its largest utilisation is a fatigue row. */
+    @Test
+    void aFatigueFailureFailsTheReport() throws Exception {
+        Project p = project("""
+                {"tensio": 1, "materials": {"st": {"E": 210000, "nu": 0.3, "fy": 370, "fu": 630}},
+                 "sections": {"s": {"material": "st", "profile": {"type": "CircleProfile", "radius": 10}}},
+                 "stations": {"A": {"section": "s", "forces": {"run": {"Mx": 2e5}}}},
+                 "fatigue": {"materials": {"st": {"estimate": "steel", "surface": "hotRolled"}},
+                   "stations": {"A": {"histories": {"h": {"rotating": "run"}}, "criteria": ["fatigueGoodman"]}}}}
+                """);
+        CheckReport r = CheckOp.check(p, ENGINE);
+        CheckResult g = result(r, "fatigueGoodman");
+        // σa = 32 M/(π d³) = 254.6 MPa against Se = 315 × 57.7 × 630^−0.718 × kb(20 mm): utilisation > 1
+        assertFalse(g.passed());
+        assertFalse(r.passed());
+        assertEquals(g.utilisation(), r.maxUtilisation());
+        assertTrue(r.results().get(r.governingIndex()).isFatigue());
+    }
 }
