@@ -44,8 +44,8 @@ final class FatigueSection {
         doc.add(new Doc.Heading(2, "Fatigue", "fatigue"));
         doc.add(new Doc.Caution(CAUTION, "caution-fatigue"));
         doc.add(new Doc.Para("Distortion-energy method: at every sample point the Kf-amplified alternating and mean"
-                + " stresses of the load cycle are combined into von Mises values σa' and σm' (the axial alternating"
-                + " stress divided by 0.85); the criteria give the factor of safety n and the utilisation 1/n. A"
+                + " stresses of the load cycle are combined into von Mises values σa' and σm' (for the fatigue lines the"
+                + " axial alternating stress divided by 0.85; the yield checks take the actual stresses); the criteria give the factor of safety n and the utilisation 1/n. A"
                 + " rotating shaft under loads fixed in space has its bending fully reversed at every fibre. Notch"
                 + " factors act only where each notch is located. Equation and table numbers are those of Shigley's"
                 + " Mechanical Engineering Design, 9th/10th ed., recalled from memory.", true));

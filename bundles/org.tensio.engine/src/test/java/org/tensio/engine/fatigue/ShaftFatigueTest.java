@@ -300,4 +300,40 @@ class ShaftFatigueTest {
         assertEquals(g.utilisation(), r.maxUtilisation());
         assertTrue(r.results().get(r.governingIndex()).isFatigue());
     }
+
+    /**
+     * Scaling law (exact algebra): every stress is linear in the loads, so scaling the whole cycle by λ scales
+     * σa', σm' and σmax' by λ and divides n of the linear criteria (Goodman, Soderberg, ASME elliptic, both yield
+     * checks) by λ, on a non-round section (an angle: finite-element torsion and shear) with a notch band.
+     */
+    @Test
+    void scalingTheCycleScalesTheDemand() throws Exception {
+        String base = """
+                {"tensio": 1, "materials": {"st": {"E": 210000, "nu": 0.3, "fy": 370, "fu": 630}},
+                 "sections": {"L": {"material": "st", "profile": {"type": "LShapeProfile", "depth": 80, "thickness": 8,
+                   "filletRadius": 8}}},
+                 "stations": {"A": {"section": "L", "forces": {}}},
+                 "fatigue": {"materials": {"st": {"estimate": "steel", "surface": "machined"}},
+                   "stations": {"A": {"histories": {"h": {"alternating": {"Vy": S1, "Mx": S2, "T": S3}, "mean": {"N": S4,
+                     "My": S5}}}, "criteria": ["fatigueGoodman", "fatigueSoderberg", "fatigueAsmeElliptic",
+                     "firstCycleYield", "langer"],
+                     "notches": [{"type": "shoulderFillet", "kt": 2.0, "kts": 1.6, "location": {"radiusBand": [20, 60]}}]}}}}
+                """;
+        double[] v = {3000, 2e5, 1e5, 2e4, -1e5};
+        double lambda = 2.5;
+        CheckReport[] r = new CheckReport[2];
+        for (int k = 0; k < 2; k++) {
+            String json = base;
+            for (int i = 0; i < v.length; i++) {
+                json = json.replace("S" + (i + 1), Double.toString(v[i] * (k == 0 ? 1 : lambda)));
+            }
+            r[k] = CheckOp.check(project(json), ENGINE);
+        }
+        for (String c : List.of("fatigueGoodman", "fatigueSoderberg", "fatigueAsmeElliptic", "firstCycleYield", "langer")) {
+            FatigueDetail a = result(r[0], c).fatigue(), b = result(r[1], c).fatigue();
+            assertEquals(a.factorOfSafety() / lambda, b.factorOfSafety(), 1e-12 * a.factorOfSafety(), c);
+            assertEquals(lambda * a.sigmaA(), b.sigmaA(), 1e-12 * b.sigmaA(), c);
+            assertEquals(result(r[0], c).point(), result(r[1], c).point(), c);
+        }
+    }
 }
