@@ -290,8 +290,8 @@ public final class FatigueCheckOp {
             MinimumDiameter.Result r = MinimumDiameter.solve(cr, fs.requiredFactor(), ma, mmean, ta, tm, fm.sut(), sy, se,
                     kf, kfs, d0);
             d[0] = r.diameter();
-            return "minimum diameter for n = " + fmt(fs.requiredFactor()) + " by DE-" + cr.label() + ": " + fmt(r.diameter()) + " (Se = "
-                    + fmt(r.se()) + ", Kf = " + fmt(r.kf()) + ", Kfs = " + fmt(r.kfs()) + " at that diameter, notch radii"
+            return "minimum diameter for n = " + fmt(fs.requiredFactor()) + " by DE-" + cr.label() + ": " + fmt(r.diameter()) + " "
+                    + project.units().length() + " (Se = " + fmt(r.se()) + " " + project.units().stressUnit() + ", Kf = " + fmt(r.kf()) + ", Kfs = " + fmt(r.kfs()) + " at that diameter, notch radii"
                     + " scaled with it; " + r.iterations() + " iterations; Shigley's Mechanical Engineering Design,"
                     + " 9th/10th ed., sec. 7-4, from memory)" + (loads.axialAmplitude() != 0 || loads.mean().n() != 0
                             ? "; the axial force is not part of this closed form" : "");
