@@ -10,6 +10,7 @@ import org.tensio.engine.project.Project;
 import org.tensio.engine.service.SectionAnalysisService;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -23,6 +24,9 @@ import picocli.CommandLine.Spec;
         description = "Utilisation checks of every station, load case and combination against the materials' limits"
                 + " (exit 0: all pass, 1: some utilisation > 1, 2: bad input).")
 final class CheckCommand implements Callable<Integer> {
+
+    @Mixin
+    ExtensionOptions extensions = new ExtensionOptions();
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -39,7 +43,7 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        SectionAnalysisService engine = SectionAnalysisService.create();
+        SectionAnalysisService engine = extensions.engine();
         Project project = engine.readProject(file);
         CheckReport report = CheckOp.check(project, engine);
         PrintWriter out = spec.commandLine().getOut();
@@ -57,7 +61,8 @@ final class CheckCommand implements Callable<Integer> {
 
     /** Writes the HTML report (and its PDF) into {@code reportDir}; the exit code stays the check's. */
     private void writeReport(Project project, CheckReport report, SectionAnalysisService engine) throws java.io.IOException {
-        java.nio.file.Path html = org.tensio.cli.report.ReportWriter.write(reportDir, file, project, report, engine);
+        java.nio.file.Path html = org.tensio.cli.report.ReportWriter.write(reportDir, file, project, report, engine,
+                extensions.reportSections());
         spec.commandLine().getErr().println("report: " + html);
     }
 }

@@ -10,6 +10,7 @@ import org.tensio.engine.project.Project;
 import org.tensio.engine.service.SectionAnalysisService;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -19,6 +20,9 @@ import picocli.CommandLine.Spec;
         description = "Per-point envelope of a station's stresses over all its load cases and combinations, and the"
                 + " envelope of its internal forces.")
 final class EnvelopeCommand implements Callable<Integer> {
+
+    @Mixin
+    ExtensionOptions extensions = new ExtensionOptions();
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -41,7 +45,7 @@ final class EnvelopeCommand implements Callable<Integer> {
         if (limit < 0) {
             throw new IllegalArgumentException("--limit: must be 0 (all) or positive, got " + limit);
         }
-        SectionAnalysisService engine = SectionAnalysisService.create();
+        SectionAnalysisService engine = extensions.engine();
         Project project = engine.readProject(file);
         StationEnvelope e = EnvelopeOp.envelope(project, station, engine);
         PrintWriter out = spec.commandLine().getOut();

@@ -14,6 +14,7 @@ import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -22,6 +23,9 @@ import picocli.CommandLine.Spec;
 @Command(name = "properties", mixinStandardHelpOptions = true,
         description = "Exact section properties (area, centroid, second moments, principal axes, moduli).")
 final class PropertiesCommand implements Callable<Integer> {
+
+    @Mixin
+    ExtensionOptions extensions = new ExtensionOptions();
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -41,7 +45,7 @@ final class PropertiesCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        SectionAnalysisService engine = SectionAnalysisService.create();
+        SectionAnalysisService engine = extensions.engine();
         Project project = engine.readProject(file);
         List<Section> sections = sectionId != null ? List.of(project.section(sectionId))
                 : new ArrayList<>(project.sections().values());

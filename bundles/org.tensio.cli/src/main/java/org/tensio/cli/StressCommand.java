@@ -10,6 +10,7 @@ import org.tensio.engine.stress.PointStress;
 import org.tensio.engine.stress.ShearMethod;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -18,6 +19,9 @@ import picocli.CommandLine.Spec;
 @Command(name = "stress", mixinStandardHelpOptions = true,
         description = "The full stress state at one point of a station's section for a load case or combination.")
 final class StressCommand implements Callable<Integer> {
+
+    @Mixin
+    ExtensionOptions extensions = new ExtensionOptions();
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -44,7 +48,7 @@ final class StressCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         Point2 p = parsePoint(at);
-        SectionAnalysisService engine = SectionAnalysisService.create();
+        SectionAnalysisService engine = extensions.engine();
         Project project = engine.readProject(file);
         PointStress s = engine.stressAt(project, station, caseId, p, shearMethod);
         String sectionId = project.station(station).sectionId();
