@@ -32,7 +32,7 @@ final class MohrCirclePainter {
         }
         int line = gc.getFontMetrics().getHeight();
         double left = area.x + 2 * PAD, right = area.x + area.width - 2 * PAD;
-        double top = area.y + PAD + 2 * line, bottom = area.y + area.height - PAD - 2 * line;
+        double top = area.y + PAD + 3 * line, bottom = area.y + area.height - PAD - line;
         double s1 = ps.sigma1(), s3 = ps.sigma3(), r = ps.tauMax();
         double lo = Math.min(s3, 0), hi = Math.max(s1, 0);
         if (hi - lo == 0) {
@@ -74,7 +74,9 @@ final class MohrCirclePainter {
         dot(gc, x1, cy, p.tension);
         dot(gc, x3, cy, p.compression);
         gc.setForeground(p.tension);
-        gc.drawText("\u03c31", Arrows.round(x1 + 6), Arrows.round(cy + 2), true); //$NON-NLS-1$
+        Point e1 = gc.textExtent("\u03c31"); //$NON-NLS-1$
+        double at1 = x1 + 6 + e1.x <= area.x + area.width - 2 ? x1 + 6 : x1 - e1.x - 6;
+        gc.drawText("\u03c31", Arrows.round(at1), Arrows.round(cy + 2), true); //$NON-NLS-1$
         gc.setForeground(p.compression);
         Point e3 = gc.textExtent("\u03c33"); //$NON-NLS-1$
         gc.drawText("\u03c33", Arrows.round(x3 - e3.x - 6), Arrows.round(cy + 2), true); //$NON-NLS-1$
@@ -85,7 +87,7 @@ final class MohrCirclePainter {
         String legend = NLS.bind(Messages.Mohr_legend, new Object[] { ResultsText.number(s1), ResultsText.number(s3),
                 ResultsText.number(r), stressUnit });
         gc.setForeground(p.ink);
-        gc.drawText(legend, area.x + PAD, area.y + area.height - PAD - line, true);
+        gc.drawText(legend, area.x + PAD, area.y + PAD + line, true);
     }
 
     private static void circle(GC gc, java.util.function.DoubleUnaryOperator px,

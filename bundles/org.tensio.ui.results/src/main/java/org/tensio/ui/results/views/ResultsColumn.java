@@ -10,7 +10,8 @@ import org.tensio.ui.results.model.ResultsText;
 /**
  * The columns of the results tree, in display order. Utilisation on every node (the subtree's largest);
  * demand, capacity, material and point of the governing point below the node (stress unit of the project;
- * point in the section frame, length unit). Numbers with six significant digits.
+ * point in the section frame, length unit). Numbers with six significant digits; a coordinate that is
+ * round-off (|v| ≤ 1e-12 × the point's distance from the origin) is shown as 0.
  */
 enum ResultsColumn {
     NAME(Messages.ResultsColumn_name, 240, ResultNode::name, Comparator.comparing(ResultNode::name)),
@@ -24,8 +25,13 @@ enum ResultsColumn {
             byResult(CheckResult::capacity)),
     MATERIAL(Messages.ResultsColumn_material, 110, n -> n.governing() == null ? "" : n.governing().material(), //$NON-NLS-1$
             Comparator.comparing(n -> n.governing() == null ? "" : n.governing().material())), //$NON-NLS-1$
-    X(Messages.ResultsColumn_x, 75, n -> number(n, r -> r.point().x()), byResult(r -> r.point().x())),
-    Y(Messages.ResultsColumn_y, 75, n -> number(n, r -> r.point().y()), byResult(r -> r.point().y()));
+    X(Messages.ResultsColumn_x, 75, n -> number(n, r -> snap(r.point().x(), r.point().y())),
+            byResult(r -> r.point().x())),
+    Y(Messages.ResultsColumn_y, 75, n -> number(n, r -> snap(r.point().y(), r.point().x())),
+            byResult(r -> r.point().y()));
+
+    /** A coordinate within 1e-12 of the point's distance from the origin is shown as 0 (display only). */
+    private static final double ROUND_OFF = 1e-12;
 
     private final String header;
     private final int width;
@@ -58,6 +64,10 @@ enum ResultsColumn {
 
     boolean numeric() {
         return this != NAME && this != MATERIAL && this != RESULT;
+    }
+
+    static double snap(double v, double other) {
+        return Math.abs(v) <= ROUND_OFF * Math.hypot(v, other) ? 0.0 : v;
     }
 
     private static String number(ResultNode n, java.util.function.ToDoubleFunction<CheckResult> f) {

@@ -154,6 +154,9 @@ class MarkersTest {
         UiConditions.waitUntil(wb.display, WorkbenchFixture.TIMEOUT, "the Problems view to list " + group,
                 () -> !UiConditions.find(wb.window.getShell(), Tree.class, t -> {
                     for (TreeItem i : t.getItems()) {
+                        org.eclipse.swt.widgets.Event expand = new org.eclipse.swt.widgets.Event();
+                        expand.item = i;
+                        t.notifyListeners(org.eclipse.swt.SWT.Expand, expand); // the viewer creates the children
                         i.setExpanded(true);
                         if (i.getText(0).equals(group)) {
                             return true;

@@ -104,6 +104,7 @@ class ResultsViewTest {
         assertEquals("18.7500", shear.getItem(0).getText(6));
         assertEquals("-150.000", shear.getItem(0).getText(7));
         assertFalse(caution().isEmpty(), "caution line in the results view");
+        tree.setTopItem(root);
         UiConditions.flush(wb.display);
         Screenshots.save(wb.window.getShell(), "results-tree.png");
     }
@@ -126,6 +127,7 @@ class ResultsViewTest {
             assertEquals(1, c.getItem(0).getItemCount(), "one governing point");
             assertEquals(station.getText(1), c.getItem(0).getItem(0).getText(1), "the chain carries the station's value");
         }
+        tree.setTopItem(root);
         UiConditions.flush(wb.display);
         Screenshots.save(wb.window.getShell(), "results-only-governing.png");
 

@@ -139,6 +139,7 @@ class StressPointViewTest {
         assertEquals("Mx", contributionsTable.getItem(3).getText(0));
         assertEquals(contributions.getAsJsonObject("Mx").get("sigmaZ").getAsDouble(),
                 Double.parseDouble(contributionsTable.getItem(3).getText(1)), 5e-6 * scale);
+        tree.showItem(point);
         UiConditions.flush(wb.display);
         Screenshots.save(wb.window.getShell(), "stress-point-governing.png");
         IWorkbenchPartReference ref = wb.page.getReference(stress);
