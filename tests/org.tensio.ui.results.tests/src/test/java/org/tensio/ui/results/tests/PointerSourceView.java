@@ -4,6 +4,12 @@ import java.util.List;
 import java.util.concurrent.CopyOnWriteArrayList;
 import java.util.function.Consumer;
 
+import org.eclipse.core.runtime.ListenerList;
+import org.eclipse.jface.viewers.ISelection;
+import org.eclipse.jface.viewers.ISelectionChangedListener;
+import org.eclipse.jface.viewers.ISelectionProvider;
+import org.eclipse.jface.viewers.SelectionChangedEvent;
+import org.eclipse.jface.viewers.StructuredSelection;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
@@ -14,7 +20,7 @@ import org.tensio.ui.selection.SectionPointerSource;
 /**
  * A stand-in for the section editor (built in another bundle): a part that offers a {@link SectionPointerSource}
  * through {@code getAdapter}, as the contract in {@code org.tensio.ui.selection} says, and lets a test move the
- * "pointer".
+ * "pointer" and publish a selection.
  */
 public final class PointerSourceView extends ViewPart implements SectionPointerSource {
 
@@ -23,9 +29,42 @@ public final class PointerSourceView extends ViewPart implements SectionPointerS
 
     private final List<Consumer<SectionPoint>> listeners = new CopyOnWriteArrayList<>();
 
+    private final ListenerList<ISelectionChangedListener> selectionListeners = new ListenerList<>();
+    private ISelection selection = StructuredSelection.EMPTY;
+
     @Override
     public void createPartControl(Composite parent) {
         new Label(parent, SWT.NONE).setText("pointer source (test stand-in for the section editor)");
+        getSite().setSelectionProvider(new ISelectionProvider() {
+            @Override
+            public void addSelectionChangedListener(ISelectionChangedListener l) {
+                selectionListeners.add(l);
+            }
+
+            @Override
+            public void removeSelectionChangedListener(ISelectionChangedListener l) {
+                selectionListeners.remove(l);
+            }
+
+            @Override
+            public ISelection getSelection() {
+                return selection;
+            }
+
+            @Override
+            public void setSelection(ISelection s) {
+                selection = s;
+                SelectionChangedEvent e = new SelectionChangedEvent(this, s);
+                for (ISelectionChangedListener l : selectionListeners) {
+                    l.selectionChanged(e);
+                }
+            }
+        });
+    }
+
+    /** Publishes {@code value} (a SectionPoint or StationRef) as this part's selection. UI thread. */
+    public void publish(Object value) {
+        getSite().getSelectionProvider().setSelection(new StructuredSelection(value));
     }
 
     /** Tells the listeners that the pointer is over {@code p} (null: it left the section). UI thread. */
