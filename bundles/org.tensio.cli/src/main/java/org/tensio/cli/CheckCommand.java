@@ -12,7 +12,6 @@ import org.tensio.engine.service.SectionAnalysisService;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
@@ -26,13 +25,10 @@ import picocli.CommandLine.Spec;
 final class CheckCommand implements Callable<Integer> {
 
     @Mixin
-    ExtensionOptions extensions = new ExtensionOptions();
+    ProjectInput input = new ProjectInput();
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
-
-    @Parameters(index = "0", paramLabel = "FILE", description = "project file (JSON)")
-    Path file;
 
     @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
             description = "text, json or csv (default: ${DEFAULT-VALUE})")
@@ -43,8 +39,8 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        SectionAnalysisService engine = extensions.engine();
-        Project project = engine.readProject(file);
+        SectionAnalysisService engine = input.engine();
+        Project project = input.read();
         CheckReport report = CheckOp.check(project, engine);
         PrintWriter out = spec.commandLine().getOut();
         switch (format) {
@@ -61,8 +57,8 @@ final class CheckCommand implements Callable<Integer> {
 
     /** Writes the HTML report (and its PDF) into {@code reportDir}; the exit code stays the check's. */
     private void writeReport(Project project, CheckReport report, SectionAnalysisService engine) throws java.io.IOException {
-        java.nio.file.Path html = org.tensio.cli.report.ReportWriter.write(reportDir, file, project, report, engine,
-                extensions.reportSections());
+        java.nio.file.Path html = org.tensio.cli.report.ReportWriter.write(reportDir, input.file(), project, report, engine,
+                input.reportSections());
         spec.commandLine().getErr().println("report: " + html);
     }
 }

@@ -1,6 +1,5 @@
 package org.tensio.cli;
 
-import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -16,7 +15,6 @@ import com.google.gson.JsonObject;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code tensio properties FILE [--section ID] [--format text|json]}. */
@@ -25,13 +23,10 @@ import picocli.CommandLine.Spec;
 final class PropertiesCommand implements Callable<Integer> {
 
     @Mixin
-    ExtensionOptions extensions = new ExtensionOptions();
+    ProjectInput input = new ProjectInput();
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
-
-    @Parameters(index = "0", paramLabel = "FILE", description = "project file (JSON)")
-    Path file;
 
     @Option(names = "--section", paramLabel = "ID", description = "only this section")
     String sectionId;
@@ -45,8 +40,8 @@ final class PropertiesCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        SectionAnalysisService engine = extensions.engine();
-        Project project = engine.readProject(file);
+        SectionAnalysisService engine = input.engine();
+        Project project = input.read();
         List<Section> sections = sectionId != null ? List.of(project.section(sectionId))
                 : new ArrayList<>(project.sections().values());
         List<SectionProperties> list = new ArrayList<>();

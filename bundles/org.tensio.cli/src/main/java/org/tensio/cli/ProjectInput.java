@@ -15,22 +15,28 @@ import java.util.ServiceLoader;
 import java.util.stream.Stream;
 
 import org.tensio.cli.report.spi.ReportSection;
+import org.tensio.engine.project.Project;
 import org.tensio.engine.service.SectionAnalysisService;
 import org.tensio.engine.spi.Extensions;
 
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
 
 /**
- * The {@code --extensions PATH} option of the commands that read a project: jars (or folders of jars) whose
+ * What every command that reads a project takes: the project file {@code FILE} and the {@code --extensions PATH}
+ * option: jars (or folders of jars) whose
  * {@link ServiceLoader} registrations contribute check criteria, profile types and report sections. The
  * environment variable {@code TENSIO_EXTENSIONS} (paths separated by the platform's path separator) adds to
  * it, so a build server can set it once. The jars are loaded in a class loader whose parent is the command
  * line's own, so they see the engine's public API.
  */
-final class ExtensionOptions {
+final class ProjectInput {
 
     /** The environment variable read besides the option. */
     static final String ENV = "TENSIO_EXTENSIONS";
+
+    @Parameters(index = "0", paramLabel = "FILE", description = "project file (JSON)")
+    Path file;
 
     @Option(names = "--extensions", paramLabel = "PATH", split = "${sys:path.separator}",
             description = "jar files or folders of jars contributing criteria, profile types and report sections"
@@ -39,6 +45,20 @@ final class ExtensionOptions {
 
     private ClassLoader loader;
     private SectionAnalysisService engine;
+
+    /** @return the project file as given */
+    Path file() {
+        return file;
+    }
+
+    /**
+     * @return the project read by {@link #engine()}
+     * @throws org.tensio.engine.io.ProjectFormatException naming the field and the value when the file is not valid
+     * @throws IOException when it cannot be read
+     */
+    Project read() throws IOException, org.tensio.engine.io.ProjectFormatException {
+        return engine().readProject(file);
+    }
 
     /** @return the engine with the contributed criteria and profile types (one per command run) */
     SectionAnalysisService engine() {
@@ -70,7 +90,7 @@ final class ExtensionOptions {
                     }
                 }
             }
-            ClassLoader parent = ExtensionOptions.class.getClassLoader();
+            ClassLoader parent = ProjectInput.class.getClassLoader();
             loader = all.isEmpty() ? parent : new URLClassLoader(urls(all), parent);
         }
         return loader;
