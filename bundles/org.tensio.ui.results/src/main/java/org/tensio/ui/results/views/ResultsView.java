@@ -17,7 +17,9 @@ import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.IStatus;
 import org.eclipse.core.runtime.OperationCanceledException;
 import org.eclipse.core.runtime.Status;
+import org.eclipse.core.runtime.jobs.IJobChangeEvent;
 import org.eclipse.core.runtime.jobs.Job;
+import org.eclipse.core.runtime.jobs.JobChangeAdapter;
 import org.eclipse.core.runtime.preferences.IEclipsePreferences.IPreferenceChangeListener;
 import org.eclipse.jface.action.MenuManager;
 import org.eclipse.jface.layout.GridDataFactory;
@@ -174,6 +176,19 @@ public final class ResultsView extends ViewPart {
                 }
             };
             job.setPriority(Job.LONG);
+            // cancelled while waiting or while running (the Progress view's stop button): say so
+            job.addJobChangeListener(new JobChangeAdapter() {
+                @Override
+                public void done(IJobChangeEvent event) {
+                    if (event.getResult() != null && event.getResult().getSeverity() == IStatus.CANCEL) {
+                        display.asyncExec(() -> {
+                            if (id == request.get() && !status.isDisposed()) {
+                                status.setText(NLS.bind(Messages.ResultsView_cancelled, f.getFileName()));
+                            }
+                        });
+                    }
+                }
+            });
             job.schedule();
         }
     }
@@ -203,6 +218,11 @@ public final class ResultsView extends ViewPart {
             Thread.currentThread().interrupt();
             return ResultsTree.failed(file, Messages.ResultsView_noService);
         }
+    }
+
+    /** @return the status line (what is shown, what is being checked, or what went wrong). UI thread. */
+    public String statusText() {
+        return status.getText();
     }
 
     /** @return what the tree shows now: the last project whose check has finished. UI thread. */

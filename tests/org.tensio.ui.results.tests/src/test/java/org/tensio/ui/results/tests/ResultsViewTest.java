@@ -196,6 +196,25 @@ class ResultsViewTest {
         assertEquals(50, WorkbenchFixture.points(view.input().root()).size());
     }
 
+    @Test
+    void aCancelledCheckSaysSoAndTheNextOneRuns(@org.junit.jupiter.api.io.TempDir Path dir) throws Exception {
+        // a copy of the demo: a new file, so its sections are not solved yet and the check takes a while
+        Path copy = dir.resolve("copy.tensio.json");
+        java.nio.file.Files.copy(WorkbenchFixture.demo(), copy);
+        ResultsView view = (ResultsView) wb.page.showView(ResultsView.ID);
+        view.showProject(copy);
+        org.eclipse.core.runtime.jobs.Job.getJobManager().cancel(ResultsView.JOB_FAMILY);
+        UiConditions.waitUntil(wb.display, WorkbenchFixture.TIMEOUT, "the cancelled check to end",
+                () -> org.eclipse.core.runtime.jobs.Job.getJobManager().find(ResultsView.JOB_FAMILY).length == 0
+                        && view.statusText().contains("cancelled"));
+        assertTrue(view.input() == null || !view.input().file().map(copy::equals).orElse(false),
+                "no results of the cancelled check");
+
+        view.showProject(copy);
+        wb.waitForResults(view, copy);
+        assertEquals(50, WorkbenchFixture.points(view.input().root()).size());
+    }
+
     private String execute(String format) throws Exception {
         ICommandService commands = wb.window.getService(ICommandService.class);
         IHandlerService handlers = wb.window.getService(IHandlerService.class);
