@@ -2,7 +2,6 @@ package org.tensio.ui.results.preferences;
 
 import org.eclipse.jface.preference.FieldEditorPreferencePage;
 import org.eclipse.jface.preference.StringFieldEditor;
-import org.eclipse.osgi.util.NLS;
 import org.eclipse.ui.IWorkbench;
 import org.eclipse.ui.IWorkbenchPreferencePage;
 import org.eclipse.ui.preferences.ScopedPreferenceStore;
@@ -31,7 +30,14 @@ public final class ResultsPreferencePage extends FieldEditorPreferencePage imple
     private static final class ThresholdField extends StringFieldEditor {
         ThresholdField(org.eclipse.swt.widgets.Composite parent) {
             super(ResultsPreferences.WARNING_THRESHOLD, Messages.ResultsPreferencePage_threshold, 8, parent);
-            setErrorMessage(NLS.bind(Messages.ResultsPreferencePage_invalid, ResultsPreferences.WARNING_THRESHOLD));
+            setErrorMessage(Messages.ResultsPreferencePage_invalid);
+        }
+
+        @Override
+        protected void doFillIntoGrid(org.eclipse.swt.widgets.Composite parent, int numColumns) {
+            super.doFillIntoGrid(parent, numColumns);
+            // validate on every change (typing, pasting, a program), not only on key strokes
+            getTextControl(parent).addModifyListener(e -> valueChanged());
         }
 
         @Override
