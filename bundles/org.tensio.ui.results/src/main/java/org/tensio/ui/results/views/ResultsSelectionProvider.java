@@ -22,7 +22,8 @@ import org.tensio.ui.selection.StationRef;
 /**
  * The results view's selection as the workbench sees it: the contract values of {@code org.tensio.ui.selection},
  * not tree nodes. A station or case node becomes a {@link StationRef}; a criterion or point node a
- * {@link SectionPoint} at its governing point (with its station, section and case); the project node nothing.
+ * {@link SectionPoint} at its governing point (with its station, section and case — no case for a fatigue result,
+ * whose case is a load history); the project node nothing.
  * Setting a selection of such values selects the matching nodes.
  */
 final class ResultsSelectionProvider implements ISelectionProvider {
@@ -84,9 +85,10 @@ final class ResultsSelectionProvider implements ISelectionProvider {
                 return new StationRef(file, node.stationId(), node.caseId());
             case CRITERION, POINT:
                 CheckResult r = node.governing();
+                // a fatigue result's "case" is its load history, not a load case: let the point's reader choose
                 return r == null ? null
-                        : new SectionPoint(file, node.stationId(), node.sectionId(), node.caseId(), r.point().x(),
-                                r.point().y());
+                        : new SectionPoint(file, node.stationId(), node.sectionId(),
+                                r.fatigue() != null ? null : node.caseId(), r.point().x(), r.point().y());
             default:
                 return null;
         }
