@@ -17,6 +17,7 @@ import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.ui.IWorkbenchPage;
+import org.eclipse.ui.IWorkbenchPartConstants;
 import org.eclipse.ui.PartInitException;
 import org.eclipse.ui.part.ViewPart;
 import org.tensio.ui.services.AnalysisServiceTracker;
@@ -24,7 +25,8 @@ import org.tensio.ui.services.AnalysisServiceTracker;
 /**
  * The Sections view ({@code org.tensio.ui.views.sections}): one row of properties per section of a project
  * file, computed by the engine's {@code SectionAnalysisService}. A bad file shows a message, never an error
- * dialog or a dead view.
+ * dialog or a dead view. Each time a load finishes the view fires {@link IWorkbenchPartConstants#PROP_INPUT}
+ * (see {@link #input()}), so that other views can follow the project it shows.
  */
 public final class SectionsView extends ViewPart {
 
@@ -114,6 +116,8 @@ public final class SectionsView extends ViewPart {
             }
         }
         status.getParent().layout(true);
+        // tells listeners (the result views) that input() changed
+        firePropertyChange(IWorkbenchPartConstants.PROP_INPUT);
     }
 
     @Override

@@ -1,0 +1,91 @@
+package org.tensio.ui.results.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.Tree;
+import org.eclipse.swt.widgets.TreeItem;
+import org.eclipse.ui.IWorkbench;
+import org.eclipse.ui.IWorkbenchPage;
+import org.eclipse.ui.IWorkbenchWindow;
+import org.eclipse.ui.PlatformUI;
+import org.tensio.ui.results.model.NodeKind;
+import org.tensio.ui.results.model.ResultNode;
+import org.tensio.ui.results.views.ResultsView;
+
+/** The running workbench in the Tensio perspective, a large window for screenshots, and the demo file. */
+final class WorkbenchFixture {
+
+    static final String PERSPECTIVE_ID = "org.tensio.ui.perspective";
+    static final Duration TIMEOUT = Duration.ofSeconds(120);
+
+    final IWorkbenchWindow window;
+    final IWorkbenchPage page;
+    final Display display;
+
+    WorkbenchFixture() throws Exception {
+        IWorkbench workbench = PlatformUI.getWorkbench();
+        window = workbench.getActiveWorkbenchWindow();
+        page = workbench.showPerspective(PERSPECTIVE_ID, window);
+        display = window.getShell().getDisplay();
+        assertEquals(PERSPECTIVE_ID, page.getPerspective().getId());
+        window.getShell().setBounds(0, 0, 1600, 1000);
+        UiConditions.flush(display);
+    }
+
+    /** @return docs/examples/demo.tensio.json (system property tensio.demo), absolute and normalised */
+    static Path demo() {
+        Path p = Path.of(System.getProperty("tensio.demo", "../../docs/examples/demo.tensio.json")).toAbsolutePath()
+                .normalize();
+        assertNotNull(Files.exists(p) ? p : null, "demo file " + p);
+        return p;
+    }
+
+    /** Waits until the results view shows a finished check of {@code file}. */
+    void waitForResults(ResultsView view, Path file) {
+        UiConditions.waitUntil(display, TIMEOUT, "the results of " + file,
+                () -> view.input() != null && view.input().file().map(file::equals).orElse(false)
+                        && (view.input().root() != null || view.input().failed()));
+    }
+
+    /** @return every point node of the tree in project order */
+    static List<ResultNode> points(ResultNode root) {
+        List<ResultNode> out = new ArrayList<>();
+        collect(root, out);
+        return out;
+    }
+
+    private static void collect(ResultNode n, List<ResultNode> out) {
+        if (n.kind() == NodeKind.POINT) {
+            out.add(n);
+        }
+        for (ResultNode c : n.children()) {
+            collect(c, out);
+        }
+    }
+
+    /** @return the results tree widget of {@code view} */
+    Tree tree(ResultsView view) {
+        List<Tree> trees = UiConditions.find(window.getShell(), Tree.class,
+                t -> t.getColumnCount() == 8 && !t.isDisposed());
+        assertEquals(1, trees.size(), "one results tree in the window");
+        return trees.get(0);
+    }
+
+    /** @return the items of {@code items} and below, depth first (expand the viewer first) */
+    static List<TreeItem> allItems(TreeItem[] items) {
+        List<TreeItem> out = new ArrayList<>();
+        for (TreeItem i : items) {
+            out.add(i);
+            out.addAll(allItems(i.getItems()));
+        }
+        return out;
+    }
+}
