@@ -85,9 +85,12 @@ public final class ProjectEditor extends MultiPageEditorPart implements CommandS
     private TablePage casesPage;
     private TablePage combinationsPage;
     private int jsonPageIndex;
+    /** the page shown before the current page change (getActivePage already names the new one) */
+    private int shownPage;
     private ValidationJob validation;
     private int validations;
     private boolean checkingExternal;
+    private java.util.function.Predicate<Path> externalChangePrompt = this::askReload;
 
     @Override
     public void init(IEditorSite site, IEditorInput input) throws PartInitException {
@@ -184,7 +187,8 @@ public final class ProjectEditor extends MultiPageEditorPart implements CommandS
 
     @Override
     protected void pageChange(int newPageIndex) {
-        int old = getActivePage();
+        int old = shownPage;
+        shownPage = newPageIndex;
         if (old == jsonPageIndex && newPageIndex != jsonPageIndex && !jsonPage.apply()) {
             setActivePage(jsonPageIndex);
             return;
@@ -340,15 +344,27 @@ public final class ProjectEditor extends MultiPageEditorPart implements CommandS
         checkingExternal = true;
         try {
             stamp = now;
-            if (MessageDialog.openQuestion(getSite().getShell(), Messages.ProjectEditor_changedTitle,
-                    NLS.bind(isDirty() ? Messages.ProjectEditor_changedDirty : Messages.ProjectEditor_changed,
-                            path.getFileName()))) {
+            if (externalChangePrompt.test(path)) {
                 reload();
             }
         } finally {
             checkingExternal = false;
         }
         return true;
+    }
+
+    private boolean askReload(Path file) {
+        return MessageDialog.openQuestion(getSite().getShell(), Messages.ProjectEditor_changedTitle,
+                NLS.bind(isDirty() ? Messages.ProjectEditor_changedDirty : Messages.ProjectEditor_changed,
+                        file.getFileName()));
+    }
+
+    /**
+     * Replaces the question asked when the file changed outside the editor (a dialog by default): the predicate
+     * gets the file and answers whether to reload it.
+     */
+    public void setExternalChangePrompt(java.util.function.Predicate<Path> prompt) {
+        externalChangePrompt = prompt == null ? this::askReload : prompt;
     }
 
     /** Reads the file again, dropping the undo history. */

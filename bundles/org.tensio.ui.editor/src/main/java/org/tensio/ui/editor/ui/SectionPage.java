@@ -212,10 +212,12 @@ final class SectionPage {
         viewer.setProperty(SnapToGrid.PROPERTY_GRID_ORIGIN, new Point(0, 0));
     }
 
-    /** Grid step in the file's length unit: a power of ten, about a twentieth of the section. */
+    /** Grid step in the file's length unit: a 1-2-5 number at most a fifteenth of the section. */
     double gridStep(SectionEditPart part) {
-        double extent = ViewTransform.TARGET_EXTENT / part.transform().scale();
-        return Math.pow(10, Math.floor(Math.log10(extent / 20)));
+        double raw = ViewTransform.TARGET_EXTENT / part.transform().scale() / 15;
+        double decade = Math.pow(10, Math.floor(Math.log10(raw)));
+        double m = raw / decade;
+        return (m >= 5 ? 5 : m >= 2 ? 2 : 1) * decade;
     }
 
     private void refreshStations() {

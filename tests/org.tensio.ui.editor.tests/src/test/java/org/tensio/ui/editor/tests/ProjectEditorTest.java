@@ -123,6 +123,8 @@ class ProjectEditorTest {
         assertTrue(message.contains("bracket"), message);
         assertEquals(IMarker.SEVERITY_ERROR, marker.getAttribute(IMarker.SEVERITY, -1));
         waitUntil(display, TIMEOUT, "the part to be marked in the drawing", () -> editor.errorParts().contains(part));
+        page.showView("org.eclipse.ui.views.ProblemView");
+        page.activate(editor);
         UiConditions.flush(display);
         Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-invalid-marker.png");
 
