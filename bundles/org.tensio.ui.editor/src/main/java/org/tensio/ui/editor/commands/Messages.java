@@ -21,6 +21,7 @@ final class Messages extends NLS {
     public static String ReplaceDocument_label;
     public static String MovePart_label;
     public static String DeletePart_label;
+    public static String SetStationSection_label;
 
     static {
         NLS.initializeMessages(BUNDLE_NAME, Messages.class);

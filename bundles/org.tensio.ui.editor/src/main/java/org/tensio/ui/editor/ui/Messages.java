@@ -12,6 +12,10 @@ final class Messages extends NLS {
     public static String ProjectEditor_pageSection;
     public static String ProjectEditor_pageMaterials;
     public static String ProjectEditor_pageCases;
+    public static String ProjectEditor_pageStations;
+    public static String ProjectEditor_columnStation;
+    public static String ProjectEditor_columnSection;
+    public static String ProjectEditor_columnCases;
     public static String ProjectEditor_pageCombinations;
     public static String ProjectEditor_pageJson;
     public static String ProjectEditor_columnMaterial;

@@ -83,6 +83,7 @@ public final class ProjectEditor extends MultiPageEditorPart implements CommandS
     private JsonPage jsonPage;
     private TablePage materialsPage;
     private TablePage casesPage;
+    private org.tensio.ui.editor.pages.StationsPage stationsPage;
     private TablePage combinationsPage;
     private int jsonPageIndex;
     /** the page shown before the current page change (getActivePage already names the new one) */
@@ -152,6 +153,9 @@ public final class ProjectEditor extends MultiPageEditorPart implements CommandS
         materialsPage = new TablePage(this, () -> Tables.materials(model), () -> Tables.MATERIAL_KEYS,
                 Messages.ProjectEditor_columnMaterial);
         setPageText(addPage(materialsPage.create(getContainer())), Messages.ProjectEditor_pageMaterials);
+        stationsPage = new org.tensio.ui.editor.pages.StationsPage(this, Messages.ProjectEditor_columnStation,
+                Messages.ProjectEditor_columnSection, Messages.ProjectEditor_columnCases);
+        setPageText(addPage(stationsPage.create(getContainer())), Messages.ProjectEditor_pageStations);
         casesPage = new TablePage(this, () -> Tables.cases(model), () -> Tables.FORCE_KEYS,
                 Messages.ProjectEditor_columnCase);
         setPageText(addPage(casesPage.create(getContainer())), Messages.ProjectEditor_pageCases);
@@ -181,6 +185,7 @@ public final class ProjectEditor extends MultiPageEditorPart implements CommandS
 
     private void refreshTables() {
         materialsPage.refresh();
+        stationsPage.refresh();
         casesPage.refresh();
         combinationsPage.refresh();
     }
@@ -510,7 +515,12 @@ public final class ProjectEditor extends MultiPageEditorPart implements CommandS
         return jsonPage.text();
     }
 
-    /** Shows page {@code index} (0 section, 1 materials, 2 cases, 3 combinations, 4 JSON). */
+    /** @return the stations page */
+    public org.tensio.ui.editor.pages.StationsPage stationsPage() {
+        return stationsPage;
+    }
+
+    /** Shows page {@code index} (0 section, 1 materials, 2 stations, 3 cases, 4 combinations, 5 JSON). */
     public void showPage(int index) {
         setActivePage(index);
     }

@@ -67,7 +67,7 @@ class PagesTest {
     void jsonPageEditBecomesOneUndoableCommand(@TempDir Path dir) throws Exception {
         Path file = EditorFixture.demoCopy(dir);
         ProjectEditor editor = EditorFixture.open(page, file);
-        editor.showPage(4);
+        editor.showPage(5);
         String text = editor.jsonText().getText();
         assertEquals(JsonParser.parseString(Files.readString(file)), JsonParser.parseString(text),
                 "the JSON page shows the file's content");
@@ -124,6 +124,43 @@ class PagesTest {
         waitUntil(display, TIMEOUT, "the template's contour", () -> editor.contour() != null && !editor.contourBusy()
                 && "ULS".equals(editor.contour().request().caseId()));
         Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-template-composite.png");
+    }
+
+    @Test
+    void stationSectionIsChosenByCommand(@TempDir Path dir) throws Exception {
+        Path file = EditorFixture.demoCopy(dir);
+        ProjectEditor editor = EditorFixture.open(page, file);
+        editor.showPage(2);
+        var station = editor.model().stations().get(0);
+        assertEquals("drive_shaft", station.section());
+        editor.stationsPage().choose(station, "idler_axle");
+        assertEquals("idler_axle", station.section());
+        assertTrue(editor.isDirty());
+        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-stations-table.png");
+        editor.getCommandStack().undo();
+        assertEquals("drive_shaft", station.section());
+    }
+
+    @Test
+    void aStationOrPointSelectedElsewhereIsShown(@TempDir Path dir) throws Exception {
+        Path file = EditorFixture.demoCopy(dir);
+        ProjectEditor editor = EditorFixture.open(page, file);
+        editor.showSection("drive_shaft");
+        StandInResultsView results = (StandInResultsView) page.showView(StandInResultsView.ID);
+        var display = EditorFixture.display(editor);
+        Path project = file.toAbsolutePath().normalize();
+        results.select(new org.tensio.ui.selection.StationRef(project, "bracket_root", "Q"));
+        waitUntil(display, TIMEOUT, "the editor to show the bracket", () -> "bracket".equals(editor.shownSection()));
+        results.select(new org.tensio.ui.selection.SectionPoint(project, "platform_beam_midspan", "platform_beam", "ULS",
+                10, 140));
+        waitUntil(display, TIMEOUT, "the editor to mark the point on the beam",
+                () -> "platform_beam".equals(editor.shownSection()) && editor.overlayFigure().mark() != null);
+        var t = EditorFixture.section(editor).transform();
+        assertEquals(new org.eclipse.draw2d.geometry.Point(t.fx(10), t.fy(140)), editor.overlayFigure().mark());
+        page.activate(editor);
+        waitUntil(display, TIMEOUT, "the ULS contour", () -> editor.contour() != null && !editor.contourBusy()
+                && "ULS".equals(editor.contour().request().caseId()));
+        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-point-from-results.png");
     }
 
     private static int count(ProblemMarkers markers) {
