@@ -32,6 +32,7 @@ public final class TablePage {
     private final Supplier<List<String>> keys;
     private final String firstTitle;
     private TableViewer viewer;
+    private org.eclipse.swt.widgets.Label problems;
     private List<String> columns = List.of();
 
     /**
@@ -46,14 +47,33 @@ public final class TablePage {
         this.firstTitle = firstTitle;
     }
 
-    /** Creates the table. */
+    /** Creates the page: a line for the engine's messages above the table. */
     public Control create(Composite parent) {
-        viewer = new TableViewer(parent, SWT.BORDER | SWT.FULL_SELECTION | SWT.V_SCROLL | SWT.H_SCROLL);
+        Composite page = new Composite(parent, SWT.NONE);
+        page.setLayout(new org.eclipse.swt.layout.GridLayout(1, false));
+        problems = new org.eclipse.swt.widgets.Label(page, SWT.WRAP);
+        problems.setLayoutData(new org.eclipse.swt.layout.GridData(SWT.FILL, SWT.CENTER, true, false));
+        problems.setForeground(page.getDisplay().getSystemColor(SWT.COLOR_DARK_RED));
+        viewer = new TableViewer(page, SWT.BORDER | SWT.FULL_SELECTION | SWT.V_SCROLL | SWT.H_SCROLL);
+        viewer.getControl().setLayoutData(new org.eclipse.swt.layout.GridData(SWT.FILL, SWT.FILL, true, true));
         viewer.getTable().setHeaderVisible(true);
         viewer.getTable().setLinesVisible(true);
         viewer.setContentProvider(ArrayContentProvider.getInstance());
         refresh();
-        return viewer.getControl();
+        return page;
+    }
+
+    /** Shows the engine's messages (empty: none) above the table. */
+    public void showProblems(String text) {
+        if (problems != null && !problems.isDisposed()) {
+            problems.setText(text);
+            problems.getParent().layout(true);
+        }
+    }
+
+    /** @return the messages shown above the table */
+    public String problems() {
+        return problems == null ? "" : problems.getText(); //$NON-NLS-1$
     }
 
     /** Reads the rows (and columns) again. */

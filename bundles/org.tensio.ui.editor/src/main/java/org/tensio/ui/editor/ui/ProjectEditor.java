@@ -238,6 +238,10 @@ public final class ProjectEditor extends MultiPageEditorPart implements CommandS
         project = p;
         problems = found;
         sectionPage.validated(p, found);
+        String text = String.join("\n", found.stream().map(Problem::message).toList()); //$NON-NLS-1$
+        materialsPage.showProblems(text);
+        casesPage.showProblems(text);
+        combinationsPage.showProblems(text);
     }
 
     @Override
@@ -523,6 +527,11 @@ public final class ProjectEditor extends MultiPageEditorPart implements CommandS
     /** Shows page {@code index} (0 section, 1 materials, 2 stations, 3 cases, 4 combinations, 5 JSON). */
     public void showPage(int index) {
         setActivePage(index);
+    }
+
+    /** Shows or hides the mesh overlay (the page's Mesh check box). */
+    public void showMesh(boolean on) {
+        sectionPage.setMesh(on);
     }
 
     /** Fits the drawing into the window. */

@@ -437,6 +437,11 @@ final class SectionPage {
         return contourCheck.getSelection();
     }
 
+    void setMesh(boolean on) {
+        meshCheck.setSelection(on);
+        overlays.redraw();
+    }
+
     boolean meshOn() {
         return meshCheck.getSelection();
     }

@@ -56,10 +56,13 @@ class PagesTest {
         ProblemMarkers markers = new ProblemMarkers(file);
         waitUntil(display, TIMEOUT, "a marker for E = -5", () -> !editor.problems().isEmpty() && count(markers) == 1);
         assertTrue(editor.problems().get(0).path().startsWith("$.materials.S355"), editor.problems().toString());
+        assertTrue(editor.table(0).problems().contains("S355"), "the table page shows the message: "
+                + editor.table(0).problems());
         Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-materials-table.png");
         editor.getCommandStack().undo();
         assertEquals(210000, s355.node().get("E").getAsDouble());
-        waitUntil(display, TIMEOUT, "the marker to go", () -> editor.problems().isEmpty() && count(markers) == 0);
+        waitUntil(display, TIMEOUT, "the marker to go", () -> editor.problems().isEmpty() && count(markers) == 0
+                && editor.table(0).problems().isEmpty());
         assertFalse(editor.isDirty());
     }
 

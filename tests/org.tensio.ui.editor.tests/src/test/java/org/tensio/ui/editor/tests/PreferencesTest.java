@@ -60,7 +60,10 @@ class PreferencesTest {
             EditorFixture.section(editor).getContentPane().translateToAbsolute(p);
             return expected.equals(Screenshots.pixel(editor.graphicalViewer().getControl(), p.x, p.y));
         });
-        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-grey-coarse.png");
+        editor.showMesh(true);
+        assertEquals(3 * editor.contour().elementCount(), editor.overlayFigure().meshEdgeCount(),
+                "three edges drawn per triangle");
+        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-grey-coarse-mesh.png");
     }
 
     @Test

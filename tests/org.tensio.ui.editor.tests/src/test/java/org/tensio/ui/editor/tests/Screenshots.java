@@ -64,23 +64,49 @@ final class Screenshots {
         }
     }
 
-    /** Saves what the screen shows inside {@code shell}'s bounds as {@code folder()/name}. */
+    /** Saves what the screen shows inside {@code shell}'s bounds as {@code folder()/name}, once it stops changing. */
     static Path save(Shell shell, String name) throws IOException {
         settle(shell);
         Path file = folder().resolve(name);
         Files.createDirectories(file.getParent());
+        // GTK paints asynchronously: capture until two captures in a row agree (at most 50 rounds of events)
+        ImageData shot = capture(shell);
+        for (int i = 0; i < 50; i++) {
+            UiConditions.waitUntil(shell.getDisplay(), java.time.Duration.ofSeconds(5), "one round of events",
+                    new java.util.function.BooleanSupplier() {
+                        private boolean ran;
+
+                        @Override
+                        public boolean getAsBoolean() {
+                            boolean done = ran;
+                            ran = true;
+                            return done;
+                        }
+                    });
+            settle(shell);
+            ImageData again = capture(shell);
+            boolean same = java.util.Arrays.equals(shot.data, again.data);
+            shot = again;
+            if (same) {
+                break;
+            }
+        }
+        ImageLoader loader = new ImageLoader();
+        loader.data = new ImageData[] { shot };
+        loader.save(file.toString(), SWT.IMAGE_PNG);
+        return file;
+    }
+
+    private static ImageData capture(Shell shell) {
         Rectangle bounds = shell.getBounds();
         Image image = new Image(shell.getDisplay(), bounds.width, bounds.height);
         GC gc = new GC(shell.getDisplay());
         try {
             gc.copyArea(image, bounds.x, bounds.y);
-            ImageLoader loader = new ImageLoader();
-            loader.data = new ImageData[] { image.getImageData() };
-            loader.save(file.toString(), SWT.IMAGE_PNG);
+            return image.getImageData();
         } finally {
             gc.dispose();
             image.dispose();
         }
-        return file;
     }
 }
