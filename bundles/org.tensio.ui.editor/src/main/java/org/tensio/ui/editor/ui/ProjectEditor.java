@@ -226,7 +226,8 @@ public final class ProjectEditor extends MultiPageEditorPart implements CommandS
         validations++;
         int generation = validations;
         var display = getContainer().getDisplay();
-        validation = new ValidationJob(model.toText(), path.getFileName().toString(), services, markers,
+        validation = new ValidationJob(model.toText(), model.toJson().has("loadTables") ? path : null, //$NON-NLS-1$
+                path.getFileName().toString(), services, markers,
                 (p, found) -> display.asyncExec(() -> validated(generation, p, found)));
         validation.schedule(VALIDATION_DELAY_MS);
     }

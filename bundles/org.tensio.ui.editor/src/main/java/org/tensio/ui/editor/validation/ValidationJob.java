@@ -32,13 +32,24 @@ public final class ValidationJob extends Job {
     private final AnalysisServiceTracker services;
     private final ProblemMarkers markers;
     private final BiConsumer<Project, List<Problem>> done;
+    private final java.nio.file.Path file;
 
     /**
      * @param done called (from the job's thread) with the parsed project (null when invalid) and the problems
      */
     public ValidationJob(String text, String sourceName, AnalysisServiceTracker services, ProblemMarkers markers,
             BiConsumer<Project, List<Problem>> done) {
+        this(text, null, sourceName, services, markers, done);
+    }
+
+    /**
+     * @param file the project file when the text has load tables (their CSV paths are relative to its folder),
+     *             else null
+     */
+    public ValidationJob(String text, java.nio.file.Path file, String sourceName, AnalysisServiceTracker services,
+            ProblemMarkers markers, BiConsumer<Project, List<Problem>> done) {
         super(Messages.ValidationJob_name);
+        this.file = file;
         this.text = text;
         this.sourceName = sourceName;
         this.services = services;
@@ -50,6 +61,27 @@ public final class ValidationJob extends Job {
     @Override
     public boolean belongsTo(Object family) {
         return family == FAMILY;
+    }
+
+    /**
+     * The service parses text without a folder, where load tables cannot be found; a project with load tables is
+     * checked from a transient copy beside the file (deleted at once), messages naming the file itself.
+     */
+    private Project readBesideFile(SectionAnalysisService service) throws ProjectFormatException, java.io.IOException {
+        java.nio.file.Path copy = java.nio.file.Files.createTempFile(file.toAbsolutePath().getParent(),
+                "." + file.getFileName(), ".check.json"); //$NON-NLS-1$ //$NON-NLS-2$
+        try {
+            java.nio.file.Files.writeString(copy, text, java.nio.charset.StandardCharsets.UTF_8);
+            return service.readProject(copy);
+        } catch (ProjectFormatException e) {
+            String prefix = e.path() + ": "; //$NON-NLS-1$
+            String message = e.getMessage().startsWith(prefix) ? e.getMessage().substring(prefix.length())
+                    : e.getMessage();
+            throw new ProjectFormatException(e.path(),
+                    message.replace(copy.getFileName().toString(), file.getFileName().toString()));
+        } finally {
+            java.nio.file.Files.deleteIfExists(copy);
+        }
     }
 
     @Override
@@ -67,10 +99,12 @@ public final class ValidationJob extends Job {
         Project project = null;
         List<Problem> problems;
         try {
-            project = service.get().parseProject(text, sourceName);
+            project = file == null ? service.get().parseProject(text, sourceName) : readBesideFile(service.get());
             problems = List.of();
         } catch (ProjectFormatException e) {
             problems = List.of(new Problem(e.path(), e.getMessage()));
+        } catch (java.io.IOException e) {
+            problems = List.of(new Problem("$", e.getMessage())); //$NON-NLS-1$
         } catch (IllegalArgumentException e) {
             problems = List.of(new Problem("$", e.getMessage())); //$NON-NLS-1$
         }

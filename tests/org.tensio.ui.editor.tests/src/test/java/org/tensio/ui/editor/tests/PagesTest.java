@@ -10,6 +10,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Arrays;
+import java.util.List;
 
 import org.eclipse.ui.IWorkbenchPage;
 import org.eclipse.ui.views.properties.IPropertyDescriptor;
@@ -164,6 +165,29 @@ class PagesTest {
         waitUntil(display, TIMEOUT, "the ULS contour", () -> editor.contour() != null && !editor.contourBusy()
                 && "ULS".equals(editor.contour().request().caseId()));
         Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-point-from-results.png");
+    }
+
+    @Test
+    void aProjectWithLoadTablesIsCheckedWithItsTables(@TempDir Path dir) throws Exception {
+        Path examples = Path.of(System.getProperty("tensio.demo", "../../docs/examples/demo.tensio.json")).getParent();
+        Path folder = examples.resolve("frame-export");
+        Path file = dir.resolve("mezzanine.tensio.json");
+        Files.copy(folder.resolve("mezzanine.tensio.json"), file);
+        Files.copy(folder.resolve("mezzanine-forces.csv"), dir.resolve("mezzanine-forces.csv"));
+        ProjectEditor editor = EditorFixture.open(page, file);
+        assertTrue(editor.problems().isEmpty(), editor.problems().toString());
+        assertFalse(editor.project().stations().isEmpty());
+        Files.delete(dir.resolve("mezzanine-forces.csv"));
+        // any edit validates again: the same value of nu, as a command
+        editor.execute(new org.tensio.ui.editor.commands.SetValueCommand(editor.model().materials().get(0), "nu",
+                editor.model().materials().get(0).get("nu")));
+        var display = EditorFixture.display(editor);
+        waitUntil(display, TIMEOUT, "the missing table to be named", () -> !editor.problems().isEmpty());
+        String message = editor.problems().get(0).message();
+        assertTrue(message.contains("mezzanine-forces.csv") && message.contains("(in mezzanine.tensio.json)"), message);
+        try (var files = Files.list(dir)) {
+            assertEquals(List.of(file), files.toList(), "no transient copy left beside the file");
+        }
     }
 
     private static int count(ProblemMarkers markers) {
