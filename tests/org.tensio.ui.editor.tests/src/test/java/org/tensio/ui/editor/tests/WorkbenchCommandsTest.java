@@ -90,7 +90,8 @@ class WorkbenchCommandsTest {
     @Test
     void insertProfileAndAddPart(@TempDir Path dir) throws Exception {
         ProjectEditor editor = EditorFixture.open(page, EditorFixture.demoCopy(dir));
-        editor.showSection("drive_shaft");
+        // the beam: the demo's fatigue block needs the drive shaft to stay a circle
+        editor.showSection("platform_beam");
         page.activate(editor);
         IHandlerService handlers = editor.getSite().getService(IHandlerService.class);
         var commands = editor.getSite().getService(org.eclipse.ui.commands.ICommandService.class);
@@ -98,12 +99,12 @@ class WorkbenchCommandsTest {
         var call = org.eclipse.core.commands.ParameterizedCommand.generateCommand(addPart,
                 java.util.Map.of("org.tensio.ui.editor.profileType", "RectangleProfile"));
         handlers.executeCommand(call, null);
-        var section = editor.model().section("drive_shaft");
+        var section = editor.model().section("platform_beam");
         assertEquals(2, section.parts().size());
         assertEquals("RectangleProfile", section.parts().get(1).profile().type());
         var display = EditorFixture.display(editor);
-        waitUntil(display, TIMEOUT, "validation of the composite", () -> editor.project() != null
-                && editor.project().section("drive_shaft").parts().size() == 2);
+        waitUntil(display, TIMEOUT, "validation of the composite", () -> !editor.problems().isEmpty()
+                || editor.project() != null && editor.project().section("platform_beam").parts().size() == 2);
         assertTrue(editor.problems().isEmpty(), "the new part touches, not overlaps: " + editor.problems());
     }
 
