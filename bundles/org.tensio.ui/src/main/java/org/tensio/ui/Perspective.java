@@ -4,7 +4,10 @@ import org.eclipse.ui.IPageLayout;
 import org.eclipse.ui.IPerspectiveFactory;
 import org.tensio.ui.views.SectionsView;
 
-/** The Tensio perspective ({@code org.tensio.ui.perspective}): the Sections view, no editor area. */
+/**
+ * The Tensio perspective ({@code org.tensio.ui.perspective}): the Sections view on the left of the editor area
+ * (where the section editor of org.tensio.ui.editor opens project files).
+ */
 public final class Perspective implements IPerspectiveFactory {
 
     /** Perspective id as declared in plugin.xml. */
@@ -12,8 +15,8 @@ public final class Perspective implements IPerspectiveFactory {
 
     @Override
     public void createInitialLayout(IPageLayout layout) {
-        layout.setEditorAreaVisible(false);
-        layout.addView(SectionsView.ID, IPageLayout.LEFT, 0.5f, layout.getEditorArea());
+        layout.setEditorAreaVisible(true);
+        layout.addView(SectionsView.ID, IPageLayout.LEFT, 0.3f, layout.getEditorArea());
         layout.getViewLayout(SectionsView.ID).setCloseable(false);
     }
 }

@@ -1,0 +1,112 @@
+package org.tensio.ui.editor.overlay;
+
+import java.util.HashMap;
+import java.util.Map;
+
+import org.tensio.engine.checks.UnitStressField;
+import org.tensio.engine.fem.FiniteElementSolution;
+import org.tensio.engine.linalg.ProgressMonitor;
+import org.tensio.engine.loads.InternalForces;
+import org.tensio.engine.mesh.Mesh;
+import org.tensio.engine.mesh.MeshOptions;
+import org.tensio.engine.project.Project;
+import org.tensio.engine.properties.SectionProperties;
+import org.tensio.engine.section.Criterion;
+import org.tensio.engine.section.MaterialLimits;
+import org.tensio.engine.section.Section;
+import org.tensio.engine.service.SectionAnalysisService;
+
+/**
+ * Computes a contour with the engine service: properties and finite-element solution of the section, its unit
+ * stress fields at every mesh node ({@link UnitStressField}) and the forces of the station's case or
+ * combination ({@link Project#forces}). Runs off the UI thread; cancellable through the monitor.
+ */
+public final class ContourOp {
+
+    private ContourOp() {
+    }
+
+    /**
+     * @throws java.util.concurrent.CancellationException when {@code monitor} cancels
+     * @throws IllegalArgumentException                   naming the station, case or section when unknown
+     */
+    public static ContourResult compute(SectionAnalysisService service, ContourRequest r, ProgressMonitor monitor) {
+        Project project = r.project();
+        Section section = project.section(r.sectionId());
+        SectionProperties props = service.properties(section);
+        FiniteElementSolution fe = r.targetElements() == MeshOptions.DEFAULT_ELEMENTS ? service.solution(section)
+                : service.solution(section, MeshOptions.elements(r.targetElements()), monitor);
+        if (monitor.isCancelled()) {
+            throw new java.util.concurrent.CancellationException();
+        }
+        Mesh mesh = fe.mesh();
+        double[] x = new double[mesh.nodeCount()];
+        double[] y = new double[mesh.nodeCount()];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = mesh.x(i);
+            y[i] = mesh.y(i);
+        }
+        int[] elements = new int[6 * mesh.elementCount()];
+        for (int e = 0; e < mesh.elementCount(); e++) {
+            for (int k = 0; k < 6; k++) {
+                elements[6 * e + k] = mesh.node(e, k);
+            }
+        }
+        double[] values = null;
+        double min = Double.NaN;
+        double max = Double.NaN;
+        if (r.stationId() != null && r.caseId() != null) {
+            InternalForces f = project.forces(r.stationId(), r.caseId());
+            UnitStressField field = UnitStressField.of(section, props, fe);
+            double[] s = new double[field.size()];
+            double[] zx = new double[field.size()];
+            double[] zy = new double[field.size()];
+            field.evaluate(f, s, zx, zy);
+            Map<String, Integer> sample = new HashMap<>();
+            for (int i = 0; i < field.size(); i++) {
+                sample.put(field.node(i) + "/" + field.material(i), i); //$NON-NLS-1$
+            }
+            values = new double[elements.length];
+            min = Double.POSITIVE_INFINITY;
+            max = Double.NEGATIVE_INFINITY;
+            for (int e = 0; e < mesh.elementCount(); e++) {
+                String material = section.parts().get(mesh.part(e)).material().name();
+                for (int k = 0; k < 6; k++) {
+                    Integer i = sample.get(elements[6 * e + k] + "/" + material); //$NON-NLS-1$
+                    double v = i == null ? Double.NaN
+                            : value(r.quantity(), s[i], zx[i], zy[i], project.limits().get(material));
+                    values[6 * e + k] = v;
+                    if (Double.isFinite(v)) {
+                        min = Math.min(min, v);
+                        max = Math.max(max, v);
+                    }
+                }
+            }
+            if (min > max) {
+                min = Double.NaN;
+                max = Double.NaN;
+            }
+        }
+        return new ContourResult(r, x, y, elements, values, min, max, props.centroid(), props.principalAngleDeg(),
+                props.shearCentre() != null ? props.shearCentre() : fe.shearCentre(), project.units().stressUnit());
+    }
+
+    /** @return the quantity at a point; utilisation is NaN for a material without limits */
+    static double value(Quantity q, double sigma, double tzx, double tzy, MaterialLimits limits) {
+        return switch (q) {
+            case SIGMA_Z -> sigma;
+            case TAU -> Math.hypot(tzx, tzy);
+            case VON_MISES -> MaterialLimits.demand(Criterion.vonMises, sigma, tzx, tzy);
+            case UTILISATION -> {
+                if (limits == null) {
+                    yield Double.NaN;
+                }
+                double u = 0;
+                for (Criterion c : limits.criteria()) {
+                    u = Math.max(u, MaterialLimits.demand(c, sigma, tzx, tzy) / limits.capacity(c));
+                }
+                yield u;
+            }
+        };
+    }
+}
