@@ -129,6 +129,13 @@ public final class CheckOp {
                                 continue;
                             }
                             double d = MaterialLimits.demand(c, s[i], tx[i], ty[i]);
+                            if (!Double.isFinite(d / capacity)) {
+                                throw new IllegalArgumentException("station '" + st.id() + "', case '" + caseId
+                                        + "': the " + c.name() + " utilisation of material '" + keys.get(k) + "' at ("
+                                        + f.x(i) + ", " + f.y(i) + ") is not a finite number (demand " + d
+                                        + ", capacity " + capacity + "): forces, dimensions, moduli and strengths are "
+                                        + "too far apart in magnitude for double arithmetic; check their values and units");
+                            }
                             if (d > bestD) {
                                 bestD = d;
                                 best = i;

@@ -71,16 +71,27 @@ public final class MeshGenerator {
         for (SectionPart p : section.parts()) {
             area += Math.abs(p.region().moments().area());
         }
-        this.h = options.maxEdge() > 0 ? options.maxEdge() : Math.sqrt(area / (options.targetElements() * 0.433));
+        this.h = edgeLength(area, options);
         this.gridCell = Math.max(tol * 1e3, 1e-6 * b.diagonal());
     }
 
-    /** @return the mesh of {@code section} with {@code options}; {@code monitor} may be null */
+    /** @return the target edge length for a section of {@code area} (length²): given, or from the element count */
+    static double edgeLength(double area, MeshOptions options) {
+        return options.maxEdge() > 0 ? options.maxEdge() : Math.sqrt(area / (options.targetElements() * 0.433));
+    }
+
+    /**
+     * @return the mesh of {@code section} with {@code options}; {@code monitor} may be null
+     * @throws IllegalArgumentException naming the section and the numbers when the {@link MeshBudget} estimate
+     *                                  exceeds its element or vertex limit or the heap still available, before
+     *                                  any meshing is done
+     */
     public static Mesh generate(Section section, MeshOptions options, ProgressMonitor monitor) {
+        MeshBudget.estimate(section, options).requireFitsHeap();
         return new MeshGenerator(section, options, monitor).run();
     }
 
-    /** @return the mesh of {@code section} with the default options */
+    /** @return the mesh of {@code section} with the default options (checked as {@link #generate(Section, MeshOptions, ProgressMonitor)}) */
     public static Mesh generate(Section section) {
         return generate(section, MeshOptions.defaults(), null);
     }
@@ -138,8 +149,7 @@ public final class MeshGenerator {
             Segment out = segs.get(i);
             Point2 ti = tangentAtEnd(in);
             Point2 to = tangentAtStart(out);
-            double turn = Math.atan2(ti.x() * to.y() - ti.y() * to.x(), ti.x() * to.x() + ti.y() * to.y());
-            double interior = 180 - Math.toDegrees(turn);
+            double interior = interiorAngleDeg(ti, to);
             if (interior > 180 + REENTRANT_THRESHOLD_DEG) {
                 reentrantAtStart[i] = true;
                 singularities.add(new Singularity(part, out.start().x(), out.start().y(), interior));
@@ -201,7 +211,13 @@ public final class MeshGenerator {
         return ring;
     }
 
-    private static Point2 tangentAtStart(Segment s) {
+    /** @return the interior angle at a corner from the incoming and outgoing tangents, degrees (above 180: re-entrant) */
+    static double interiorAngleDeg(Point2 ti, Point2 to) {
+        double turn = Math.atan2(ti.x() * to.y() - ti.y() * to.x(), ti.x() * to.x() + ti.y() * to.y());
+        return 180 - Math.toDegrees(turn);
+    }
+
+    static Point2 tangentAtStart(Segment s) {
         if (s instanceof ArcSegment a) {
             return a.tangentAt(a.startParam());
         }
@@ -209,7 +225,7 @@ public final class MeshGenerator {
         return new Point2(l.end().x() - l.start().x(), l.end().y() - l.start().y());
     }
 
-    private static Point2 tangentAtEnd(Segment s) {
+    static Point2 tangentAtEnd(Segment s) {
         if (s instanceof ArcSegment a) {
             return a.tangentAt(a.endParam());
         }
@@ -350,6 +366,10 @@ public final class MeshGenerator {
         }
         if (tris.isEmpty()) {
             throw new IllegalArgumentException("section '" + section.name() + "': meshing produced no elements");
+        }
+        if (tris.size() > MeshBudget.MAX_ELEMENTS) {
+            throw new IllegalArgumentException("section '" + section.name() + "': meshing gave " + tris.size()
+                    + " elements, more than the limit of " + MeshBudget.MAX_ELEMENTS + "; mesh it more coarsely");
         }
         int nc = corners.size();
         double[] cx = new double[nc], cy = new double[nc];
