@@ -111,7 +111,13 @@ final class Harness {
         if (mustFail) {
             fail("accepted an invalid input (" + what + "):\n" + abbreviate(json));
         }
-        assertTimeoutPreemptively(TIME_LIMIT, () -> checkAccepted(family, p, fullPath, what, json), () -> "hang: " + what);
+        assertTimeoutPreemptively(TIME_LIMIT, () -> {
+            try {
+                checkAccepted(family, p, fullPath, what, json);
+            } catch (RuntimeException e) {
+                throw new AssertionError("escaped " + e + " from an accepted input (" + what + "):\n" + abbreviate(json), e);
+            }
+        }, () -> "hang: " + what);
         Counts.accepted(family);
     }
 
