@@ -5,25 +5,7 @@
 # steel bar, I = 60·20³/12 = 40 000 mm⁴, c = 10 mm: Mx = 1e6 N·mm gives 250 MPa (utilisation 250/355 = 0.70423),
 # Mx = 2e6 gives 500 MPa (1.40845).
 set -u
-here=$(cd "$(dirname "$0")/../.." && pwd)
-tensio="$here/tensio"
-work=$(mktemp -d)
-trap 'rm -rf "$work"' EXIT
-pass=0; fail=0
-ok()   { pass=$((pass+1)); echo "ok   - $1"; }
-bad()  { fail=$((fail+1)); echo "FAIL - $1"; [ -n "${2:-}" ] && sed 's/^/       /' "$2" | head -20; }
-skip() { echo "skip - $1"; }
-
-# run NAME EXPECTED_EXIT -- ARGS...: stdout to $work/out, stderr to $work/err
-run() {
-  local name=$1 want=$2; shift 3
-  "$tensio" "$@" >"$work/out" 2>"$work/err"; local got=$?
-  if [ "$got" = "$want" ]; then return 0; fi
-  echo "       exit $got, wanted $want: tensio $*"; head -5 "$work/err" | sed 's/^/       /'
-  return 1
-}
-
-py() { python3 -c "$1" "$work/out"; }
+. "$(dirname "$0")/lib.sh"
 
 # one bar, two stations; B lacks load case Q, so the combination ULS cannot be evaluated there
 cat > "$work/pass.json" <<'JSON'
@@ -157,5 +139,4 @@ badcase env-unknown-station "nowhere" envelope "$work/pass.json" --station nowhe
 badcase env-no-station "station" envelope "$work/pass.json"
 badcase env-bad-limit "--limit" envelope "$work/pass.json" --station A --limit -3
 
-echo "e2e-checks: $pass passed, $fail failed"
-[ "$fail" = 0 ]
+finish e2e-checks

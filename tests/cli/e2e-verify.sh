@@ -3,24 +3,7 @@
 # codes, the atomic --output, and the fixtures inside the built engine jar.
 # Prints one line per check and a closing "e2e-verify: N passed, N failed" line; exit 1 when any check failed.
 set -u
-here=$(cd "$(dirname "$0")/../.." && pwd)
-tensio="$here/tensio"
-work=$(mktemp -d)
-trap 'rm -rf "$work"' EXIT
-pass=0; fail=0
-ok()   { pass=$((pass+1)); echo "ok   - $1"; }
-bad()  { fail=$((fail+1)); echo "FAIL - $1"; [ -n "${2:-}" ] && sed 's/^/       /' "$2" | head -20; }
-
-# run NAME EXPECTED_EXIT -- ARGS...: stdout to $work/out, stderr to $work/err
-run() {
-  local name=$1 want=$2; shift 3
-  "$tensio" "$@" >"$work/out" 2>"$work/err"; local got=$?
-  if [ "$got" = "$want" ]; then return 0; fi
-  echo "       exit $got, wanted $want: tensio $*"; head -5 "$work/err" | sed 's/^/       /'
-  return 1
-}
-
-py() { python3 -c "$1" "$work/out"; }
+. "$(dirname "$0")/lib.sh"
 
 # 1. JSON record on stdout: exit 0, the stable keys, >= 40 cases, every case passed and sourced
 if run json 0 -- verify --format json && py '
@@ -51,7 +34,7 @@ import json,sys,zipfile
 z=zipfile.ZipFile(sys.argv[1]); names=set(z.namelist())
 for f in "closed-form rolled-section-table torsion thin-walled shear elementary-shear combined-loading unsymmetric-bending".split():
     assert "verification/%s.txt"%f in names, f
-mf=z.read("META-INF/MANIFEST.MF").decode()
+mf=z.read("META-INF/MANIFEST.MF").decode().replace("\r\n","\n").replace("\n ","")  # unwrap 72-column continuation lines
 ver=[l.split(":",1)[1].strip() for l in mf.splitlines() if l.startswith("Bundle-Version:")][0]
 assert json.load(open(sys.argv[2]))["engineVersion"]==ver, ver
 assert "org.tensio.engine.verification" in mf
@@ -98,5 +81,4 @@ if run missing-dir 2 -- verify --output "$work/nope/record.json" && grep -q -- "
 if run bad-format 2 -- verify --format pdf && grep -q -- "--format" "$work/err" && ! grep -q "at org\." "$work/err"; then
   ok "verify --format pdf: exit 2, names the option"; else bad "bad format" "$work/err"; fi
 
-echo "e2e-verify: $pass passed, $fail failed"
-[ "$fail" = 0 ]
+finish e2e-verify

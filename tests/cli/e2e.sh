@@ -2,25 +2,8 @@
 # End-to-end checks of the ./tensio launcher on the bundled demo and on bad input.
 # Prints one line per check and a closing "N passed, N failed" line; exit 1 when any check failed.
 set -u
-here=$(cd "$(dirname "$0")/../.." && pwd)
-tensio="$here/tensio"
+. "$(dirname "$0")/lib.sh"
 demo="$here/docs/examples/demo.tensio.json"
-work=$(mktemp -d)
-trap 'rm -rf "$work"' EXIT
-pass=0; fail=0
-ok()   { pass=$((pass+1)); echo "ok   - $1"; }
-bad()  { fail=$((fail+1)); echo "FAIL - $1"; [ -n "${2:-}" ] && sed 's/^/       /' "$2" | head -20; }
-
-# run NAME EXPECTED_EXIT -- ARGS...: stdout to $work/out, stderr to $work/err
-run() {
-  local name=$1 want=$2; shift 3
-  "$tensio" "$@" >"$work/out" 2>"$work/err"; local got=$?
-  if [ "$got" = "$want" ]; then return 0; fi
-  echo "       exit $got, wanted $want: tensio $*"; cat "$work/err" | head -5 | sed 's/^/       /'
-  return 1
-}
-
-py() { python3 -c "$1" "$work/out"; }
 
 # 1. the demo runs and prints readable results with the caution
 if run demo 0 -- demo && grep -q "von Mises" "$work/out" && grep -q "Caution" "$work/out" && grep -q "area A" "$work/out"; then
@@ -121,5 +104,4 @@ badcase unknown-type '{"tensio":1,"materials":{"S":{"E":210000,"nu":0.3}},"secti
 # 12. usage error
 if run usage 2 -- properties && [ -s "$work/err" ]; then ok "usage error exits 2"; else bad "usage"; fi
 
-echo "e2e: $pass passed, $fail failed"
-[ "$fail" = 0 ]
+finish e2e

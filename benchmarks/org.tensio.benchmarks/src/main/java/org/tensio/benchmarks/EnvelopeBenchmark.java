@@ -1,5 +1,6 @@
 package org.tensio.benchmarks;
 
+import java.util.Arrays;
 import java.util.List;
 import java.util.Random;
 import java.util.concurrent.TimeUnit;
@@ -27,8 +28,12 @@ import org.tensio.engine.service.SectionAnalysisService;
 
 /**
  * The envelope of {@link Data#cases} load cases over {@link Data#points} points (default 10 000 × 100 000 =
- * 1e9 point-cases per operation): {@link EnvelopeKernel} with 1 and 2 threads, with and without skipping,
- * against the straightforward loop. Point-cases per second = 1e9 / (s/op).
+ * 1e9 point-cases per operation): the engine's {@link EnvelopeKernel} as shipped, both implementations
+ * ({@link Run#implementation}: {@code VECTOR}, the Vector API path the engine picks automatically when the JVM has
+ * {@code jdk.incubator.vector}, and {@code SCALAR}, its plain Java fallback), with 1 and 2 threads, with and
+ * without skipping, against the straightforward loop. Point-cases per second = 1e9 / (s/op). The fork runs with
+ * {@code --add-modules jdk.incubator.vector}; the setup fails the run when the requested implementation is not
+ * the one that runs, or when it differs from the scalar one on a slice of the data.
  * <p>
  * <b>Data.</b> The unit stress field of a real section (an invented rolled-I-like section, 300 × 150 mm, web
  * 7.1, flanges 10.7, root radius 15; steel; its finite-element solution at the default mesh), its samples
@@ -46,7 +51,7 @@ import org.tensio.engine.service.SectionAnalysisService;
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
 @Warmup(iterations = 2, time = 1)
 @Measurement(iterations = 3, time = 1)
-@Fork(value = 1, jvmArgsAppend = {"-Xmx6g"})
+@Fork(value = 1, jvmArgsAppend = {"-Xmx6g", "--add-modules=jdk.incubator.vector"})
 public class EnvelopeBenchmark {
 
     /** Points, cases, coefficient arrays and case table; built once per fork. */
@@ -104,12 +109,36 @@ public class EnvelopeBenchmark {
         public boolean skip;
         @Param("512")
         public int tile;
+        @Param({"VECTOR", "SCALAR"})
+        public EnvelopeKernel.Implementation implementation;
 
         public EnvelopeKernel.Options options;
 
         @Setup(Level.Trial)
-        public void setup() {
-            options = new EnvelopeKernel.Options(tile, threads, false, skip);
+        public void setup(Data d) {
+            options = new EnvelopeKernel.Options(tile, threads, false, skip, implementation);
+            System.out.println("# " + EnvelopeKernel.vectorStatus());
+            // a slice of the data (4 101 points: a partial last vector; 300 cases: a partial last chunk)
+            int n = Math.min(4101, d.points), nc = Math.min(300, d.cases);
+            double[][] c = new double[9][];
+            for (int k = 0; k < 9; k++) {
+                c[k] = Arrays.copyOf(d.c[k], n);
+            }
+            double[] f = Arrays.copyOf(d.table, 6 * nc);
+            EnvelopeKernel k = new EnvelopeKernel(c[0], c[1], c[2], c[3], c[4], c[5], c[6], c[7], c[8]);
+            EnvelopeKernel.Result got = k.envelope(f, options);
+            if (got.implementation() != implementation) {
+                throw new IllegalStateException("asked for " + implementation + ", ran " + got.implementation() + ": "
+                        + EnvelopeKernel.vectorStatus());
+            }
+            EnvelopeKernel.Result want = k.envelope(f, options.withImplementation(EnvelopeKernel.Implementation.SCALAR));
+            for (int i = 0; i < n; i++) {
+                if (Double.compare(got.sigmaZMax(i), want.sigmaZMax(i)) != 0 || got.vonMisesCase(i) != want.vonMisesCase(i)
+                        || Double.compare(got.vonMises(i), want.vonMises(i)) != 0
+                        || got.sigmaZMinCase(i) != want.sigmaZMinCase(i)) {
+                    throw new IllegalStateException(implementation + " differs from SCALAR at point " + i);
+                }
+            }
         }
     }
 

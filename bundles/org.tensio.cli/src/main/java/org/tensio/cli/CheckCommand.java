@@ -10,8 +10,8 @@ import org.tensio.engine.project.Project;
 import org.tensio.engine.service.SectionAnalysisService;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
@@ -24,11 +24,11 @@ import picocli.CommandLine.Spec;
                 + " (exit 0: all pass, 1: some utilisation > 1, 2: bad input).")
 final class CheckCommand implements Callable<Integer> {
 
+    @Mixin
+    ProjectInput input = new ProjectInput();
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
-
-    @Parameters(index = "0", paramLabel = "FILE", description = "project file (JSON)")
-    Path file;
 
     @Option(names = "--format", paramLabel = "FORMAT", defaultValue = "text",
             description = "text, json or csv (default: ${DEFAULT-VALUE})")
@@ -39,8 +39,8 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        SectionAnalysisService engine = SectionAnalysisService.create();
-        Project project = engine.readProject(file);
+        SectionAnalysisService engine = input.engine();
+        Project project = input.read();
         CheckReport report = CheckOp.check(project, engine);
         PrintWriter out = spec.commandLine().getOut();
         switch (format) {
@@ -57,7 +57,8 @@ final class CheckCommand implements Callable<Integer> {
 
     /** Writes the HTML report (and its PDF) into {@code reportDir}; the exit code stays the check's. */
     private void writeReport(Project project, CheckReport report, SectionAnalysisService engine) throws java.io.IOException {
-        java.nio.file.Path html = org.tensio.cli.report.ReportWriter.write(reportDir, file, project, report, engine);
+        java.nio.file.Path html = org.tensio.cli.report.ReportWriter.write(reportDir, input.file(), project, report, engine,
+                input.reportSections());
         spec.commandLine().getErr().println("report: " + html);
     }
 }

@@ -1,7 +1,6 @@
 package org.tensio.cli;
 
 import java.io.PrintWriter;
-import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
 import org.tensio.engine.checks.EnvelopeOp;
@@ -10,8 +9,8 @@ import org.tensio.engine.project.Project;
 import org.tensio.engine.service.SectionAnalysisService;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code tensio envelope FILE --station ID [--format text|json] [--limit N]}. */
@@ -20,11 +19,11 @@ import picocli.CommandLine.Spec;
                 + " envelope of its internal forces.")
 final class EnvelopeCommand implements Callable<Integer> {
 
+    @Mixin
+    ProjectInput input = new ProjectInput();
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
-
-    @Parameters(index = "0", paramLabel = "FILE", description = "project file (JSON)")
-    Path file;
 
     @Option(names = "--station", required = true, paramLabel = "ID", description = "station id")
     String station;
@@ -41,8 +40,8 @@ final class EnvelopeCommand implements Callable<Integer> {
         if (limit < 0) {
             throw new IllegalArgumentException("--limit: must be 0 (all) or positive, got " + limit);
         }
-        SectionAnalysisService engine = SectionAnalysisService.create();
-        Project project = engine.readProject(file);
+        SectionAnalysisService engine = input.engine();
+        Project project = input.read();
         StationEnvelope e = EnvelopeOp.envelope(project, station, engine);
         PrintWriter out = spec.commandLine().getOut();
         if (format == Format.json) {

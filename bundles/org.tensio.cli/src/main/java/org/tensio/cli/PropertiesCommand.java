@@ -1,6 +1,5 @@
 package org.tensio.cli;
 
-import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -14,8 +13,8 @@ import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code tensio properties FILE [--section ID] [--format text|json]}. */
@@ -23,11 +22,11 @@ import picocli.CommandLine.Spec;
         description = "Exact section properties (area, centroid, second moments, principal axes, moduli).")
 final class PropertiesCommand implements Callable<Integer> {
 
+    @Mixin
+    ProjectInput input = new ProjectInput();
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
-
-    @Parameters(index = "0", paramLabel = "FILE", description = "project file (JSON)")
-    Path file;
 
     @Option(names = "--section", paramLabel = "ID", description = "only this section")
     String sectionId;
@@ -41,8 +40,8 @@ final class PropertiesCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        SectionAnalysisService engine = SectionAnalysisService.create();
-        Project project = engine.readProject(file);
+        SectionAnalysisService engine = input.engine();
+        Project project = input.read();
         List<Section> sections = sectionId != null ? List.of(project.section(sectionId))
                 : new ArrayList<>(project.sections().values());
         List<SectionProperties> list = new ArrayList<>();

@@ -1,6 +1,5 @@
 package org.tensio.cli;
 
-import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
 import org.tensio.engine.geometry.Point2;
@@ -10,8 +9,8 @@ import org.tensio.engine.stress.PointStress;
 import org.tensio.engine.stress.ShearMethod;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code tensio stress FILE --station ID --case ID --at X,Y [--format text|json]}. */
@@ -19,11 +18,11 @@ import picocli.CommandLine.Spec;
         description = "The full stress state at one point of a station's section for a load case or combination.")
 final class StressCommand implements Callable<Integer> {
 
+    @Mixin
+    ProjectInput input = new ProjectInput();
+
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
-
-    @Parameters(index = "0", paramLabel = "FILE", description = "project file (JSON)")
-    Path file;
 
     @Option(names = "--station", required = true, paramLabel = "ID", description = "station id")
     String station;
@@ -44,8 +43,8 @@ final class StressCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         Point2 p = parsePoint(at);
-        SectionAnalysisService engine = SectionAnalysisService.create();
-        Project project = engine.readProject(file);
+        SectionAnalysisService engine = input.engine();
+        Project project = input.read();
         PointStress s = engine.stressAt(project, station, caseId, p, shearMethod);
         String sectionId = project.station(station).sectionId();
         var out = spec.commandLine().getOut();

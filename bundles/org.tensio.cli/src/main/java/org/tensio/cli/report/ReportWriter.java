@@ -18,6 +18,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.TimeZone;
 
+import org.tensio.cli.report.spi.ReportContext;
+import org.tensio.cli.report.spi.ReportSection;
 import org.tensio.engine.checks.CheckReport;
 import org.tensio.engine.checks.CheckResult;
 import org.tensio.engine.fem.FiniteElementSolution;
@@ -36,6 +38,7 @@ import org.tensio.engine.section.Material;
 import org.tensio.engine.section.MaterialLimits;
 import org.tensio.engine.section.Section;
 import org.tensio.engine.section.SectionPart;
+import org.tensio.engine.service.EngineInfo;
 import org.tensio.engine.service.SectionAnalysisService;
 import org.tensio.engine.stress.PrincipalStresses;
 import org.tensio.engine.stress.StressComponents;
@@ -83,12 +86,28 @@ public final class ReportWriter {
      */
     public static Path write(Path dir, Path projectFile, Project p, CheckReport r, SectionAnalysisService engine)
             throws IOException {
-        return write(dir, projectFile, p, r, engine, Clock.systemUTC());
+        return write(dir, projectFile, p, r, engine, List.of(), Clock.systemUTC());
+    }
+
+    /**
+     * As {@link #write(Path, Path, Project, CheckReport, SectionAnalysisService)}, with contributed sections
+     * after the built-in ones.
+     *
+     * @since 0.1
+     */
+    public static Path write(Path dir, Path projectFile, Project p, CheckReport r, SectionAnalysisService engine,
+            List<ReportSection> sections) throws IOException {
+        return write(dir, projectFile, p, r, engine, sections, Clock.systemUTC());
     }
 
     /** As {@link #write(Path, Path, Project, CheckReport, SectionAnalysisService)} with the clock given (tests). */
     static Path write(Path dir, Path projectFile, Project p, CheckReport r, SectionAnalysisService engine, Clock clock)
             throws IOException {
+        return write(dir, projectFile, p, r, engine, List.of(), clock);
+    }
+
+    static Path write(Path dir, Path projectFile, Project p, CheckReport r, SectionAnalysisService engine,
+            List<ReportSection> sections, Clock clock) throws IOException {
         if (dir == null || projectFile == null || p == null || r == null || engine == null) {
             throw new IllegalArgumentException("report: folder, project file, project, check report and engine are"
                     + " all needed");
@@ -98,9 +117,10 @@ public final class ReportWriter {
         }
         byte[] input = Files.readAllBytes(projectFile);
         Instant now = Instant.now(clock).truncatedTo(ChronoUnit.SECONDS);
-        String version = EngineVersion.get();
+        String version = EngineInfo.version();
         Meta meta = Meta.of(input, projectFile);
-        Doc doc = new Builder(projectFile, p, r, engine, meta, sha256(input), now, version).build();
+        Doc doc = new Builder(projectFile, p, r, engine, meta, sha256(input), now, version,
+                sections == null ? List.of() : List.copyOf(sections)).build();
 
         String base = baseName(projectFile);
         Files.createDirectories(dir);
@@ -185,8 +205,11 @@ public final class ReportWriter {
         private final Doc doc;
         private final CheckResult governing;
 
+        private final List<ReportSection> contributed;
+
         Builder(Path file, Project p, CheckReport r, SectionAnalysisService engine, Meta meta, String sha, Instant now,
-                String version) {
+                String version, List<ReportSection> contributed) {
+            this.contributed = contributed;
             this.file = file;
             this.p = p;
             this.r = r;
@@ -215,6 +238,7 @@ public final class ReportWriter {
             sections();
             utilisations();
             stations();
+            ContributedSections.add(doc, contributed, new ReportContext(file, sha, now, p, r, engine));
             doc.add(new Doc.Heading(2, "End of report", "end"));
             doc.add(new Doc.Para("Input file " + file.getFileName() + ", SHA-256 " + sha + "; made " + now
                     + " by Tensio engine " + version + ".", true));

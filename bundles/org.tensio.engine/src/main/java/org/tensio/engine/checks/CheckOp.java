@@ -16,6 +16,7 @@ import org.tensio.engine.section.MaterialLimits;
 import org.tensio.engine.section.Section;
 import org.tensio.engine.section.SectionPart;
 import org.tensio.engine.service.SectionAnalysisService;
+import org.tensio.engine.spi.CheckCriterion;
 import org.tensio.engine.stress.PointStressOp;
 
 /**
@@ -44,6 +45,7 @@ import org.tensio.engine.stress.PointStressOp;
 public final class CheckOp {
 
     private final Project project;
+    private final SectionAnalysisService engine;
     private final FieldCache fields;
     private CheckReport report;
 
@@ -57,7 +59,20 @@ public final class CheckOp {
             throw new IllegalArgumentException("project must not be null");
         }
         this.project = project;
+        this.engine = engine;
         this.fields = new FieldCache(engine);
+    }
+
+    /** The demand of one criterion at a point, from the point's (σz, τzx, τzy); stress unit. */
+    @FunctionalInterface
+    private interface Demand {
+        double at(double sigmaZ, double tauZX, double tauZY);
+    }
+
+    private CheckCriterion contributed(String id, String material) {
+        return engine.extensions().criterion(id).orElseThrow(() -> new IllegalArgumentException("materials." + material
+                + ".criteria: criterion '" + id + "' is not contributed to this engine (have "
+                + engine.extensions().criteria().keySet() + ")"));
     }
 
     /** @return the checks of {@code project} (see the class comment) */
@@ -120,23 +135,38 @@ public final class CheckOp {
                 }
                 for (int k = 0; k < keys.size(); k++) {
                     MaterialLimits lim = checked.get(keys.get(k));
+                    List<String> names = new ArrayList<>();
+                    List<Demand> demands = new ArrayList<>();
+                    List<Double> capacities = new ArrayList<>();
                     for (Criterion c : lim.criteria()) {
-                        double capacity = lim.capacity(c);
+                        names.add(c.name());
+                        demands.add((a, b, d) -> MaterialLimits.demand(c, a, b, d));
+                        capacities.add(lim.capacity(c));
+                    }
+                    for (String id : lim.contributedCriteria()) {
+                        CheckCriterion c = contributed(id, keys.get(k));
+                        names.add(id);
+                        demands.add(c::demand);
+                        capacities.add(c.capacity(lim));
+                    }
+                    for (int j = 0; j < names.size(); j++) {
+                        Demand demand = demands.get(j);
+                        double capacity = capacities.get(j);
                         int best = -1;
                         double bestD = Double.NEGATIVE_INFINITY;
                         for (int i = 0; i < n; i++) {
                             if (mat[i] != k) {
                                 continue;
                             }
-                            double d = MaterialLimits.demand(c, s[i], tx[i], ty[i]);
+                            double d = demand.at(s[i], tx[i], ty[i]);
                             if (!Double.isFinite(d / capacity)) {
                                 throw new IllegalArgumentException("station '" + st.id() + "', case '" + caseId
-                                        + "': the " + c.name() + " utilisation of material '" + keys.get(k) + "' at ("
-                                        + f.x(i) + ", " + f.y(i) + ") is not a finite number (demand " + d
+                                        + "': the " + names.get(j) + " utilisation of material '" + keys.get(k)
+                                        + "' at (" + f.x(i) + ", " + f.y(i) + ") is not a finite number (demand " + d
                                         + ", capacity " + capacity + "): forces, dimensions, moduli and strengths are "
                                         + "too far apart in magnitude for double arithmetic; check their values and units");
                             }
-                            if (d > bestD) {
+                            if (d > bestD || Double.isNaN(d) && !Double.isNaN(bestD)) {
                                 bestD = d;
                                 best = i;
                             }
@@ -144,8 +174,13 @@ public final class CheckOp {
                         if (best < 0) {
                             continue; // material listed but no mesh node carries it: cannot happen for a meshed part
                         }
-                        results.add(new CheckResult(st.id(), caseId, c.name(), keys.get(k), bestD / capacity, bestD,
-                                capacity, f.point(best), s[best], tx[best], ty[best], f.singular(best)));
+                        if (!Double.isFinite(bestD) || bestD < 0) {
+                            throw new IllegalStateException("criterion " + names.get(j) + " gave the demand " + bestD
+                                    + " at (" + f.x(best) + ", " + f.y(best) + "), station '" + st.id() + "', case '"
+                                    + caseId + "'; a demand must be finite and >= 0");
+                        }
+                        results.add(new CheckResult(st.id(), caseId, names.get(j), keys.get(k), bestD / capacity,
+                                bestD, capacity, f.point(best), s[best], tx[best], ty[best], f.singular(best)));
                         if (f.singular(best) && shear) {
                             singularCount++;
                             singularAt.add(String.format(Locale.ROOT, "(%.6g, %.6g)", f.x(best), f.y(best)));

@@ -107,21 +107,42 @@ public final class EnvelopeKernel {
     private final double[] c1;
     private final double[] c2;
     private final double[] c3;
+    /** Largest |coefficient| of each of the nine arrays (for the vector path's overflow guard). */
+    private final double[] maxAbs = new double[9];
+
+    /**
+     * Which implementation computes an envelope. Both give the same values and governing cases bit for bit (see
+     * the class comment); they differ in speed and in how many point-cases they skip.
+     */
+    public enum Implementation {
+        /** {@link #VECTOR} when {@link EnvelopeKernel#vectorAvailable()}, otherwise {@link #SCALAR}. */
+        AUTOMATIC,
+        /** The plain Java kernel described in the class comment, auto-vectorised by C2; runs on every JVM. */
+        SCALAR,
+        /**
+         * The JDK's incubating Vector API ({@code jdk.incubator.vector}), register-blocked: one vector of points
+         * keeps its coefficients and running extremes in registers while the cases stream past. Needs the module
+         * in the boot layer ({@code --add-modules jdk.incubator.vector}) and the C2 compiler.
+         */
+        VECTOR
+    }
 
     /**
      * Tuning of one run.
      *
-     * @param tile    points per tile, 16 to 65 536 (512–2048 keeps a tile's coefficients in L1/L2)
-     * @param threads worker threads, 1 to 256 (1 = the calling thread only)
-     * @param tauMax  also compute the largest τmax per point
-     * @param skip    skip cases that cannot govern a tile (never changes the result)
+     * @param tile           points per tile, 16 to 65 536 (512–2048 keeps a tile's coefficients in L1/L2); the
+     *                       vector path hands whole tiles to its threads too
+     * @param threads        worker threads, 1 to 256 (1 = the calling thread only)
+     * @param tauMax         also compute the largest τmax per point
+     * @param skip           skip cases that cannot govern a tile (never changes the result)
+     * @param implementation which implementation runs (never changes the result), not null
      */
-    public record Options(int tile, int threads, boolean tauMax, boolean skip) {
+    public record Options(int tile, int threads, boolean tauMax, boolean skip, Implementation implementation) {
 
         /** The default tile: 512 points, i.e. 36 KiB of coefficients. */
         public static final int DEFAULT_TILE = 512;
 
-        /** @throws IllegalArgumentException naming the field when tile or threads is out of range */
+        /** @throws IllegalArgumentException naming the field when tile or threads is out of range or implementation is null */
         public Options {
             if (tile < 16 || tile > 65_536) {
                 throw new IllegalArgumentException("tile must be 16..65536 points, got " + tile);
@@ -129,31 +150,44 @@ public final class EnvelopeKernel {
             if (threads < 1 || threads > 256) {
                 throw new IllegalArgumentException("threads must be 1..256, got " + threads);
             }
+            if (implementation == null) {
+                throw new IllegalArgumentException("implementation must not be null");
+            }
         }
 
-        /** @return tile 512, one thread, no τmax, skipping on */
+        /** Options with {@link Implementation#AUTOMATIC}. */
+        public Options(int tile, int threads, boolean tauMax, boolean skip) {
+            this(tile, threads, tauMax, skip, Implementation.AUTOMATIC);
+        }
+
+        /** @return tile 512, one thread, no τmax, skipping on, automatic implementation */
         public static Options defaults() {
-            return new Options(DEFAULT_TILE, 1, false, true);
+            return new Options(DEFAULT_TILE, 1, false, true, Implementation.AUTOMATIC);
         }
 
         /** @return these options with {@code threads} threads */
         public Options withThreads(int threads) {
-            return new Options(tile, threads, tauMax, skip);
+            return new Options(tile, threads, tauMax, skip, implementation);
         }
 
         /** @return these options with tiles of {@code tile} points */
         public Options withTile(int tile) {
-            return new Options(tile, threads, tauMax, skip);
+            return new Options(tile, threads, tauMax, skip, implementation);
         }
 
         /** @return these options with τmax on or off */
         public Options withTauMax(boolean tauMax) {
-            return new Options(tile, threads, tauMax, skip);
+            return new Options(tile, threads, tauMax, skip, implementation);
         }
 
         /** @return these options with skipping on or off */
         public Options withSkip(boolean skip) {
-            return new Options(tile, threads, tauMax, skip);
+            return new Options(tile, threads, tauMax, skip, implementation);
+        }
+
+        /** @return these options with the given implementation */
+        public Options withImplementation(Implementation implementation) {
+            return new Options(tile, threads, tauMax, skip, implementation);
         }
     }
 
@@ -187,11 +221,14 @@ public final class EnvelopeKernel {
                 throw new IllegalArgumentException(names[k] + ": length " + all[k].length + " differs from a1's "
                         + a1.length);
             }
+            double m = 0;
             for (int i = 0; i < all[k].length; i++) {
                 if (!Double.isFinite(all[k][i])) {
                     throw new IllegalArgumentException(names[k] + "[" + i + "] must be finite, got " + all[k][i]);
                 }
+                m = Math.max(m, Math.abs(all[k][i]));
             }
+            maxAbs[k] = m;
         }
         this.size = a1.length;
         this.a1 = a1;
@@ -208,6 +245,11 @@ public final class EnvelopeKernel {
     /** @return number of points */
     public int size() {
         return size;
+    }
+
+    /** @return the nine coefficient arrays a1..a3, b1..b3, c1..c3 themselves (not copies; read only) */
+    double[][] coefficients() {
+        return new double[][] {a1, a2, a3, b1, b2, b3, c1, c2, c3};
     }
 
     /**
@@ -304,46 +346,61 @@ public final class EnvelopeKernel {
                         + " must be finite, got " + cases[i]);
             }
         }
-        Result r = new Result(size, cases.length / COMPONENTS, options.tauMax());
+        boolean vector = switch (options.implementation()) {
+            case SCALAR -> false;
+            case AUTOMATIC -> vectorAvailable();
+            case VECTOR -> {
+                if (!vectorAvailable()) {
+                    throw new IllegalStateException("implementation VECTOR: not available in this JVM: "
+                            + VectorSupport.STATUS);
+                }
+                yield true;
+            }
+        };
+        // the vector path does not check each value for overflow: it runs only when no value can overflow
+        vector = vector && cannotOverflow(cases);
+        Result r = new Result(size, cases.length / COMPONENTS, options.tauMax(),
+                vector ? Implementation.VECTOR : Implementation.SCALAR);
         int tiles = (size + options.tile() - 1) / options.tile();
         int threads = Math.min(options.threads(), Math.max(1, tiles));
         AtomicInteger next = new AtomicInteger();
-        Worker[] w = new Worker[threads];
+        TileWorker[] w = new TileWorker[threads];
         for (int k = 0; k < threads; k++) {
-            w[k] = new Worker(cases, options, r, next, tiles);
+            w[k] = vector ? VectorSupport.PATH.worker(this, cases, options, r, next, tiles)
+                    : new Worker(cases, options, r, next, tiles);
         }
-        if (threads == 1) {
-            w[0].run();
-        } else {
-            Thread[] t = new Thread[threads];
-            for (int k = 0; k < threads; k++) {
-                t[k] = new Thread(w[k], "tensio-envelope-" + k);
-                t[k].setDaemon(true);
-                t[k].start();
-            }
-            boolean interrupted = false;
-            for (int k = 0; k < threads; k++) {
-                while (true) {
-                    try {
-                        t[k].join();
-                        break;
-                    } catch (InterruptedException e) {
-                        interrupted = true; // finish the run: the workers stop by themselves
-                    }
-                }
-            }
-            if (interrupted) {
-                Thread.currentThread().interrupt();
-            }
-        }
-        for (Worker x : w) {
-            if (x.failure instanceof RuntimeException re) {
-                throw re;
-            } else if (x.failure instanceof Error er) {
-                throw er;
-            }
-        }
+        TileWorker.runAll(w, "tensio-envelope-");
         return r;
+    }
+
+    /**
+     * @return true when the {@link Implementation#VECTOR} path can run in this JVM: the module
+     *         {@code jdk.incubator.vector} is in the boot layer, the engine's vector class links against it and
+     *         reproduces the scalar kernel on a small self-test, and the JIT is not limited to the client
+     *         compiler (which does not compile the Vector API to vector instructions)
+     */
+    public static boolean vectorAvailable() {
+        return VectorSupport.PATH != null;
+    }
+
+    /** @return why the vector path is or is not available, one line (for logs and benchmark output) */
+    public static String vectorStatus() {
+        return VectorSupport.STATUS;
+    }
+
+    /**
+     * True when no σz, τzx, τzy or square the kernel forms can overflow: the sums of largest |coefficient| ×
+     * largest |force| bound every term (with a factor 2 for rounding), and their squares stay finite.
+     */
+    private boolean cannotOverflow(double[] f) {
+        double[] fm = new double[COMPONENTS];
+        for (int i = 0; i < f.length; i++) {
+            fm[i % COMPONENTS] = Math.max(fm[i % COMPONENTS], Math.abs(f[i]));
+        }
+        double s = 2 * (maxAbs[0] * fm[N] + maxAbs[1] * fm[MX] + maxAbs[2] * fm[MY]);
+        double x = 2 * (maxAbs[3] * fm[T] + maxAbs[4] * fm[VX] + maxAbs[5] * fm[VY]);
+        double y = 2 * (maxAbs[6] * fm[T] + maxAbs[7] * fm[VX] + maxAbs[8] * fm[VY]);
+        return Double.isFinite(4 * (s * s + 3 * (x * x + y * y)));
     }
 
     private static final String[] KEYS = {"N", "Vx", "Vy", "Mx", "My", "T"};
@@ -354,20 +411,23 @@ public final class EnvelopeKernel {
     public static final class Result {
         private final int size;
         private final int cases;
-        private final double[] sMax;
-        private final double[] sMin;
-        private final double[] vm;
-        private final double[] tm;
-        private final int[] sMaxCase;
-        private final int[] sMinCase;
-        private final int[] vmCase;
-        private final int[] tmCase;
+        private final Implementation implementation;
+        // written by the workers of one run, each point by exactly one of them
+        final double[] sMax;
+        final double[] sMin;
+        final double[] vm;
+        final double[] tm;
+        final int[] sMaxCase;
+        final int[] sMinCase;
+        final int[] vmCase;
+        final int[] tmCase;
         private long evaluated;
         private long skipped;
 
-        Result(int size, int cases, boolean tauMax) {
+        Result(int size, int cases, boolean tauMax, Implementation implementation) {
             this.size = size;
             this.cases = cases;
+            this.implementation = implementation;
             this.sMax = new double[size];
             this.sMin = new double[size];
             this.vm = new double[size];
@@ -376,6 +436,11 @@ public final class EnvelopeKernel {
             this.vmCase = new int[size];
             this.tm = tauMax ? new double[size] : null;
             this.tmCase = tauMax ? new int[size] : null;
+        }
+
+        /** @return the implementation that computed this result, {@link Implementation#SCALAR} or {@code VECTOR} */
+        public Implementation implementation() {
+            return implementation;
         }
 
         synchronized void count(long evaluatedPointCases, long skippedPointCases) {
@@ -450,7 +515,10 @@ public final class EnvelopeKernel {
             return tmCase[p];
         }
 
-        /** @return point-cases evaluated in the main passes (excluding the seeds and the final pass) */
+        /**
+         * @return point-cases evaluated in the main passes (excluding the seeds and the final pass); the vector
+         *         path skips fewer than the scalar one (its thresholds come from the seeds only)
+         */
         public synchronized long evaluatedPointCases() {
             return evaluated;
         }
@@ -462,21 +530,17 @@ public final class EnvelopeKernel {
 
         @Override
         public String toString() {
-            return String.format(Locale.ROOT, "EnvelopeKernel.Result[points=%d, cases=%d, tauMax=%b, skipped=%d]", size,
-                    cases, tm != null, skippedPointCases());
+            return String.format(Locale.ROOT, "EnvelopeKernel.Result[points=%d, cases=%d, tauMax=%b, skipped=%d, %s]",
+                    size, cases, tm != null, skippedPointCases(), implementation);
         }
     }
 
     /** One thread's scratch and loop: takes tiles from a shared counter until none is left. */
-    private final class Worker implements Runnable {
+    private final class Worker extends TileWorker {
         final double[] f;
         final int nc;
-        final int tile;
         final boolean tau;
         final boolean skip;
-        final Result r;
-        final AtomicInteger next;
-        final int tiles;
         /** The tile's nine coefficient slices (a1..a3, b1..b3, c1..c3), copied once per tile. */
         final double[][] t;
         /** σz² and τzx² + τzy² of the current case, tile-local index. */
@@ -500,19 +564,13 @@ public final class EnvelopeKernel {
         /** Cases per chunk ({@link EnvelopeKernel#chunkSize(int)}). */
         final int chunk;
         final int[] order;
-        long evaluated;
-        long skipped;
-        Throwable failure;
 
         Worker(double[] f, Options o, Result r, AtomicInteger next, int tiles) {
+            super(r, next, tiles, o.tile(), EnvelopeKernel.this.size);
             this.f = f;
             this.nc = f.length / COMPONENTS;
-            this.tile = o.tile();
             this.tau = o.tauMax();
             this.skip = o.skip();
-            this.r = r;
-            this.next = next;
-            this.tiles = tiles;
             int len = Math.min(tile, Math.max(size, 1));
             t = new double[9][len];
             sq = new double[len];
@@ -533,20 +591,6 @@ public final class EnvelopeKernel {
             order = new int[chunk];
         }
 
-        @Override
-        public void run() {
-            try {
-                for (int k = next.getAndIncrement(); k < tiles; k = next.getAndIncrement()) {
-                    int p0 = k * tile;
-                    tile(p0, Math.min(size, p0 + tile));
-                }
-                r.count(evaluated, skipped);
-            } catch (RuntimeException | Error e) {
-                failure = e;
-                next.set(tiles); // the other workers stop after their current tile
-            }
-        }
-
         /**
          * Skipping thresholds of the tile: lower bounds of the envelope's maxima (upper bound of its σz minimum)
          * valid at every point of the tile, the better of the seeds' and the running extremes'.
@@ -561,6 +605,7 @@ public final class EnvelopeKernel {
         double seedVm;
         double seedTm;
 
+        @Override
         void tile(int p0, int p1) {
             int len = p1 - p0;
             double[][] all = {a1, a2, a3, b1, b2, b3, c1, c2, c3};
@@ -589,7 +634,7 @@ public final class EnvelopeKernel {
             thVm = seedVm;
             thTm = seedTm;
             if (skip) {
-                bounds(p0, p1);
+                bounds(p0, p1, f, tau, bSU, bSL, bVm, bTm);
                 seed(p0, len);
             }
             for (int k0 = 0, ck = 0; k0 < nc; k0 += chunk, ck++) {
@@ -744,64 +789,8 @@ public final class EnvelopeKernel {
             }
         }
 
-        /** The first case of chunk {@code ck} whose quantity q (0 σz, 1 σz, 2 von Mises², 3 τmax²) at i equals value. */
         int first(int i, int ck, double value, int q) {
-            int k1 = Math.min(nc, (ck + 1) * chunk);
-            for (int c = ck * chunk; c < k1; c++) {
-                if (quantity(i, c, q) == value) {
-                    return c;
-                }
-            }
-            throw new IllegalStateException("envelope: no case of chunk " + ck + " reproduces the extreme " + value
-                    + " at point " + i + " (defect)");
-        }
-
-        /** Quantity q (0, 1 σz; 2 von Mises square; 3 τmax square) of case c at point i, as the passes compute it. */
-        double quantity(int i, int c, int q) {
-            switch (q) {
-                case 0, 1: return sigmaZ(i, f, c);
-                case 2: return vonMisesSquare(i, f, c);
-                default: return tauMaxSquare(i, f, c);
-            }
-        }
-
-        /** Per-case bounds over the tile from the coefficient extrema. */
-        void bounds(int p0, int p1) {
-            double[] lo = new double[9], hi = new double[9];
-            double[][] all = {a1, a2, a3, b1, b2, b3, c1, c2, c3};
-            for (int k = 0; k < 9; k++) {
-                double l = Double.POSITIVE_INFINITY, h = Double.NEGATIVE_INFINITY;
-                double[] a = all[k];
-                for (int i = p0; i < p1; i++) {
-                    l = Math.min(l, a[i]);
-                    h = Math.max(h, a[i]);
-                }
-                lo[k] = l;
-                hi[k] = h;
-            }
-            for (int c = 0; c < nc; c++) {
-                int o = COMPONENTS * c;
-                double fn = f[o + N], fmx = f[o + MX], fmy = f[o + MY], ft = f[o + T], fvx = f[o + VX], fvy = f[o + VY];
-                double su = up(lo[0], hi[0], fn) + up(lo[1], hi[1], fmx) + up(lo[2], hi[2], fmy);
-                double sl = dn(lo[0], hi[0], fn) + dn(lo[1], hi[1], fmx) + dn(lo[2], hi[2], fmy);
-                double es = MARGIN * (mag(lo[0], hi[0], fn) + mag(lo[1], hi[1], fmx) + mag(lo[2], hi[2], fmy));
-                double xu = up(lo[3], hi[3], ft) + up(lo[4], hi[4], fvx) + up(lo[5], hi[5], fvy);
-                double xl = dn(lo[3], hi[3], ft) + dn(lo[4], hi[4], fvx) + dn(lo[5], hi[5], fvy);
-                double ex = MARGIN * (mag(lo[3], hi[3], ft) + mag(lo[4], hi[4], fvx) + mag(lo[5], hi[5], fvy));
-                double yu = up(lo[6], hi[6], ft) + up(lo[7], hi[7], fvx) + up(lo[8], hi[8], fvy);
-                double yl = dn(lo[6], hi[6], ft) + dn(lo[7], hi[7], fvx) + dn(lo[8], hi[8], fvy);
-                double ey = MARGIN * (mag(lo[6], hi[6], ft) + mag(lo[7], hi[7], fvx) + mag(lo[8], hi[8], fvy));
-                bSU[c] = su + es;
-                bSL[c] = sl - es;
-                double s = Math.max(Math.abs(su), Math.abs(sl)) + es;
-                double x = Math.max(Math.abs(xu), Math.abs(xl)) + ex;
-                double y = Math.max(Math.abs(yu), Math.abs(yl)) + ey;
-                double ss = s * s, tt = x * x + y * y;
-                bVm[c] = (ss + 3 * tt) * (1 + MARGIN);
-                if (tau) {
-                    bTm[c] = (0.25 * ss + tt) * (1 + MARGIN);
-                }
-            }
+            return firstCase(f, chunk, i, ck, value, q);
         }
 
         /**
@@ -809,22 +798,8 @@ public final class EnvelopeKernel {
          * values are lower bounds of the envelope, so any case below them everywhere cannot govern.
          */
         void seed(int p0, int len) {
-            int m = Math.min(SEEDS, nc);
-            // the m largest bounds, insertion into a short sorted list (largest first)
-            int[] best = new int[m];
-            int have = 0;
-            for (int c = 0; c < nc; c++) {
-                double b = bVm[c];
-                if (have == m && b <= bVm[best[m - 1]]) {
-                    continue;
-                }
-                int k = have < m ? have++ : m - 1;
-                while (k > 0 && bVm[best[k - 1]] < b) {
-                    best[k] = best[k - 1];
-                    k--;
-                }
-                best[k] = c;
-            }
+            int[] best = seeds(bVm, nc);
+            int m = best.length;
             Arrays.fill(cMax, 0, len, Double.NEGATIVE_INFINITY);
             Arrays.fill(cMin, 0, len, Double.POSITIVE_INFINITY);
             Arrays.fill(cVm, 0, len, Double.NEGATIVE_INFINITY);
@@ -852,6 +827,93 @@ public final class EnvelopeKernel {
             thVm = lv;
             thTm = lt;
         }
+    }
+
+    /**
+     * The first case of chunk {@code ck} (chunks of {@code chunk} cases of table {@code f}) whose quantity q (0, 1
+     * σz; 2 von Mises square; 3 τmax square) at point i, as the passes compute it, equals value.
+     *
+     * @throws IllegalStateException when none does (a defect)
+     */
+    int firstCase(double[] f, int chunk, int i, int ck, double value, int q) {
+        int nc = f.length / COMPONENTS;
+        int k1 = Math.min(nc, (ck + 1) * chunk);
+        for (int c = ck * chunk; c < k1; c++) {
+            double v = switch (q) {
+                case 0, 1 -> sigmaZ(i, f, c);
+                case 2 -> vonMisesSquare(i, f, c);
+                default -> tauMaxSquare(i, f, c);
+            };
+            if (v == value) {
+                return c;
+            }
+        }
+        throw new IllegalStateException("envelope: no case of chunk " + ck + " reproduces the extreme " + value
+                + " at point " + i + " (defect)");
+    }
+
+    /**
+     * Per-case bounds over points p0..p1 from the coefficient extrema: bSU, bSL bound σz from above and below,
+     * bVm the von Mises square and bTm (when tau) the τmax square, each with the margin {@link #MARGIN}.
+     */
+    void bounds(int p0, int p1, double[] f, boolean tau, double[] bSU, double[] bSL, double[] bVm, double[] bTm) {
+        int nc = f.length / COMPONENTS;
+        double[] lo = new double[9], hi = new double[9];
+        double[][] all = {a1, a2, a3, b1, b2, b3, c1, c2, c3};
+        for (int k = 0; k < 9; k++) {
+            double l = Double.POSITIVE_INFINITY, h = Double.NEGATIVE_INFINITY;
+            double[] a = all[k];
+            for (int i = p0; i < p1; i++) {
+                l = Math.min(l, a[i]);
+                h = Math.max(h, a[i]);
+            }
+            lo[k] = l;
+            hi[k] = h;
+        }
+        for (int c = 0; c < nc; c++) {
+            int o = COMPONENTS * c;
+            double fn = f[o + N], fmx = f[o + MX], fmy = f[o + MY], ft = f[o + T], fvx = f[o + VX], fvy = f[o + VY];
+            double su = up(lo[0], hi[0], fn) + up(lo[1], hi[1], fmx) + up(lo[2], hi[2], fmy);
+            double sl = dn(lo[0], hi[0], fn) + dn(lo[1], hi[1], fmx) + dn(lo[2], hi[2], fmy);
+            double es = MARGIN * (mag(lo[0], hi[0], fn) + mag(lo[1], hi[1], fmx) + mag(lo[2], hi[2], fmy));
+            double xu = up(lo[3], hi[3], ft) + up(lo[4], hi[4], fvx) + up(lo[5], hi[5], fvy);
+            double xl = dn(lo[3], hi[3], ft) + dn(lo[4], hi[4], fvx) + dn(lo[5], hi[5], fvy);
+            double ex = MARGIN * (mag(lo[3], hi[3], ft) + mag(lo[4], hi[4], fvx) + mag(lo[5], hi[5], fvy));
+            double yu = up(lo[6], hi[6], ft) + up(lo[7], hi[7], fvx) + up(lo[8], hi[8], fvy);
+            double yl = dn(lo[6], hi[6], ft) + dn(lo[7], hi[7], fvx) + dn(lo[8], hi[8], fvy);
+            double ey = MARGIN * (mag(lo[6], hi[6], ft) + mag(lo[7], hi[7], fvx) + mag(lo[8], hi[8], fvy));
+            bSU[c] = su + es;
+            bSL[c] = sl - es;
+            double s = Math.max(Math.abs(su), Math.abs(sl)) + es;
+            double x = Math.max(Math.abs(xu), Math.abs(xl)) + ex;
+            double y = Math.max(Math.abs(yu), Math.abs(yl)) + ey;
+            double ss = s * s, tt = x * x + y * y;
+            bVm[c] = (ss + 3 * tt) * (1 + MARGIN);
+            if (tau) {
+                bTm[c] = (0.25 * ss + tt) * (1 + MARGIN);
+            }
+        }
+    }
+
+    /** @return the min({@link #SEEDS}, nc) cases of largest bound {@code bVm}, largest first */
+    static int[] seeds(double[] bVm, int nc) {
+        int m = Math.min(SEEDS, nc);
+        // insertion into a short sorted list (largest first)
+        int[] best = new int[m];
+        int have = 0;
+        for (int c = 0; c < nc; c++) {
+            double b = bVm[c];
+            if (have == m && b <= bVm[best[m - 1]]) {
+                continue;
+            }
+            int k = have < m ? have++ : m - 1;
+            while (k > 0 && bVm[best[k - 1]] < b) {
+                best[k] = best[k - 1];
+                k--;
+            }
+            best[k] = c;
+        }
+        return best;
     }
 
     private static double up(double lo, double hi, double f) {

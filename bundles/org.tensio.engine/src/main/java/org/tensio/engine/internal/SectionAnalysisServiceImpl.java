@@ -2,10 +2,16 @@ package org.tensio.engine.internal;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 
 import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Reference;
+import org.osgi.service.component.annotations.ReferenceCardinality;
+import org.osgi.service.component.annotations.ReferencePolicy;
+import org.osgi.service.component.annotations.ReferencePolicyOption;
 import org.tensio.engine.fem.FiniteElementSolution;
 import org.tensio.engine.fem.SectionSolver;
 import org.tensio.engine.geometry.Point2;
@@ -22,6 +28,9 @@ import org.tensio.engine.properties.SectionProperties;
 import org.tensio.engine.properties.SectionPropertiesOp;
 import org.tensio.engine.section.Section;
 import org.tensio.engine.service.SectionAnalysisService;
+import org.tensio.engine.spi.CheckCriterion;
+import org.tensio.engine.spi.Extensions;
+import org.tensio.engine.spi.ProfileType;
 import org.tensio.engine.stress.PointStress;
 import org.tensio.engine.stress.PointStressOp;
 import org.tensio.engine.stress.ShearMethod;
@@ -48,14 +57,92 @@ public final class SectionAnalysisServiceImpl implements SectionAnalysisService 
         }
     };
 
+    private final List<CheckCriterion> boundCriteria = new ArrayList<>();
+    private final List<ProfileType> boundProfileTypes = new ArrayList<>();
+    private volatile Extensions extensions;
+
+    /** The DS component (contributions arrive through the references below) or an engine without any. */
+    public SectionAnalysisServiceImpl() {
+        this(Extensions.none());
+    }
+
+    /** @param extensions contributions found outside OSGi */
+    public SectionAnalysisServiceImpl(Extensions extensions) {
+        this.extensions = extensions == null ? Extensions.none() : extensions;
+    }
+
+    /** DS: a contributed criterion service (registered by org.tensio.extensions from the extension registry). */
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            policyOption = ReferencePolicyOption.GREEDY)
+    void addCriterion(CheckCriterion criterion) {
+        synchronized (boundCriteria) {
+            boundCriteria.add(criterion);
+            rebuild();
+        }
+    }
+
+    void removeCriterion(CheckCriterion criterion) {
+        synchronized (boundCriteria) {
+            boundCriteria.remove(criterion);
+            rebuild();
+        }
+    }
+
+    /** DS: a contributed profile type service. */
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
+            policyOption = ReferencePolicyOption.GREEDY)
+    void addProfileType(ProfileType type) {
+        synchronized (boundCriteria) {
+            boundProfileTypes.add(type);
+            rebuild();
+        }
+    }
+
+    void removeProfileType(ProfileType type) {
+        synchronized (boundCriteria) {
+            boundProfileTypes.remove(type);
+            rebuild();
+        }
+    }
+
+    /** Keeps the first of clashing contributions (the clash is reported by {@link Extensions#of}'s message). */
+    private void rebuild() {
+        List<CheckCriterion> c = new ArrayList<>();
+        for (CheckCriterion k : boundCriteria) {
+            c.add(k);
+            try {
+                Extensions.of(c, List.of());
+            } catch (IllegalArgumentException e) {
+                c.remove(c.size() - 1);
+                System.getLogger(getClass().getName()).log(System.Logger.Level.WARNING, e.getMessage());
+            }
+        }
+        List<ProfileType> p = new ArrayList<>();
+        for (ProfileType t : boundProfileTypes) {
+            p.add(t);
+            try {
+                Extensions.of(List.of(), p);
+            } catch (IllegalArgumentException e) {
+                p.remove(p.size() - 1);
+                System.getLogger(getClass().getName()).log(System.Logger.Level.WARNING, e.getMessage());
+            }
+        }
+        extensions = Extensions.of(c, p);
+    }
+
+    @Override
+    public Extensions extensions() {
+        return extensions;
+    }
+
     @Override
     public Project readProject(Path file) throws ProjectFormatException, IOException {
-        return ProjectReader.read(file);
+        return ProjectReader.read(file, extensions);
     }
 
     @Override
     public Project parseProject(String json, String sourceName) throws ProjectFormatException {
-        return ProjectReader.parse(json, sourceName);
+        return ProjectReader.parse(json, sourceName, null, extensions);
     }
 
     @Override

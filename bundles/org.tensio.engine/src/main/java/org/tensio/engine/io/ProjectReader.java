@@ -9,6 +9,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -35,6 +36,9 @@ import org.tensio.engine.profile.ArbitraryClosedProfile;
 import org.tensio.engine.profile.ArbitraryProfileWithVoids;
 import org.tensio.engine.profile.ProfileDef;
 import org.tensio.engine.profile.ProfileTypes;
+import org.tensio.engine.spi.CheckCriterion;
+import org.tensio.engine.spi.Extensions;
+import org.tensio.engine.spi.ProfileType;
 import org.tensio.engine.project.Combination;
 import org.tensio.engine.project.Project;
 import org.tensio.engine.project.Station;
@@ -131,10 +135,12 @@ public final class ProjectReader {
     private final String suffix;
     private final Path baseDir;
     private final Map<String, MaterialLimits> limits = new LinkedHashMap<>();
+    private final Extensions extensions;
 
-    private ProjectReader(String sourceName, Path baseDir) {
+    private ProjectReader(String sourceName, Path baseDir, Extensions extensions) {
         this.suffix = sourceName == null || sourceName.isEmpty() ? "" : " (in " + sourceName + ")";
         this.baseDir = baseDir;
+        this.extensions = extensions == null ? Extensions.none() : extensions;
     }
 
     /**
@@ -148,6 +154,15 @@ public final class ProjectReader {
      *                                reading
      */
     public static Project read(Path file) throws IOException, ProjectFormatException {
+        return read(file, Extensions.none());
+    }
+
+    /**
+     * As {@link #read(Path)}, accepting also the contributed criteria and profile types of {@code extensions}.
+     *
+     * @since 0.1
+     */
+    public static Project read(Path file, Extensions extensions) throws IOException, ProjectFormatException {
         Path name = file.getFileName();
         String source = name == null ? file.toString() : name.toString();
         long size = Files.size(file);
@@ -168,7 +183,7 @@ public final class ProjectReader {
         } catch (CharacterCodingException e) {
             throw new ProjectFormatException("$", "the file is not valid UTF-8 text (in " + source + ")");
         }
-        return parse(text, source, file.toAbsolutePath().getParent());
+        return parse(text, source, file.toAbsolutePath().getParent(), extensions);
     }
 
     /**
@@ -196,6 +211,17 @@ public final class ProjectReader {
      *                                not valid (I/O errors on a table included, naming the file)
      */
     public static Project parse(String json, String sourceName, Path baseDir) throws ProjectFormatException {
+        return parse(json, sourceName, baseDir, Extensions.none());
+    }
+
+    /**
+     * As {@link #parse(String, String, Path)}, accepting also the contributed criteria and profile types of
+     * {@code extensions} (null: none).
+     *
+     * @since 0.1
+     */
+    public static Project parse(String json, String sourceName, Path baseDir, Extensions extensions)
+            throws ProjectFormatException {
         String text = json == null ? "" : json;
         if (text.startsWith("\uFEFF")) {
             text = text.substring(1);
@@ -206,7 +232,7 @@ public final class ProjectReader {
                 throw tooLarge(bytes, sourceName);
             }
         }
-        ProjectReader reader = new ProjectReader(sourceName, baseDir);
+        ProjectReader reader = new ProjectReader(sourceName, baseDir, extensions);
         try {
             JsonElement root = StrictJson.parse(text, MAX_DEPTH, 2 * MAX_LOOP_VERTICES + 1, reader.suffix);
             return reader.project(root);
@@ -377,6 +403,8 @@ public final class ProjectReader {
             }
         }
         List<Criterion> criteria = new ArrayList<>();
+        List<String> contributed = new ArrayList<>();
+        List<JsonPath> contributedPaths = new ArrayList<>();
         if (f.has("criteria")) {
             JsonPath cp = p.child("criteria");
             JsonArray list = array(f.get("criteria"), cp);
@@ -387,9 +415,17 @@ public final class ProjectReader {
             for (int i = 0; i < list.size(); i++) {
                 String name = string(list.get(i), cp.item(i));
                 Criterion c = criterion(name);
+                if (c == null && extensions.criterion(name).isPresent()) {
+                    if (contributed.contains(name)) {
+                        throw fail(cp.item(i), "criterion '" + name + "' is listed twice");
+                    }
+                    contributed.add(name);
+                    contributedPaths.add(cp.item(i));
+                    continue;
+                }
                 if (c == null) {
                     throw fail(cp.item(i), "unknown criterion '" + StrictJson.abbreviate(name) + "' (use one of "
-                            + List.of(Criterion.values()) + ")");
+                            + criterionNames() + ")");
                 }
                 if (criteria.contains(c)) {
                     throw fail(cp.item(i), "criterion '" + name + "' is listed twice (items " + criteria.indexOf(c)
@@ -407,7 +443,7 @@ public final class ProjectReader {
             }
             return null;
         }
-        boolean defaulted = criteria.isEmpty();
+        boolean defaulted = criteria.isEmpty() && contributed.isEmpty();
         if (defaulted) {
             criteria.add(Criterion.vonMises);
         }
@@ -428,11 +464,37 @@ public final class ProjectReader {
                         : fail(p.child("criteria").item(i), needs + " (material '" + id + "')");
             }
         }
+        MaterialLimits built;
         try {
-            return new MaterialLimits(id, criteria, gamma, fy, fu, allowable[0], allowable[1], allowable[2]);
+            built = new MaterialLimits(id, criteria, contributed, gamma, fy, fu, allowable[0], allowable[1],
+                    allowable[2]);
         } catch (IllegalArgumentException ex) {
             throw fail(p, ex.getMessage());
         }
+        for (int i = 0; i < contributed.size(); i++) {
+            CheckCriterion c = extensions.criterion(contributed.get(i)).orElseThrow();
+            double capacity;
+            try {
+                capacity = c.capacity(built);
+            } catch (RuntimeException ex) {
+                throw fail(contributedPaths.get(i), "criterion " + c.id() + " (material '" + id + "'): "
+                        + ex.getMessage());
+            }
+            if (!(capacity > 0) || !Double.isFinite(capacity)) {
+                throw fail(contributedPaths.get(i), "criterion " + c.id() + " (material '" + id + "') gives the capacity "
+                        + capacity + "; it must be positive and finite");
+            }
+        }
+        return built;
+    }
+
+    private List<String> criterionNames() {
+        List<String> names = new ArrayList<>();
+        for (Criterion c : Criterion.values()) {
+            names.add(c.name());
+        }
+        names.addAll(extensions.criteria().keySet());
+        return names;
     }
 
     private static Criterion criterion(String name) {
@@ -576,8 +638,14 @@ public final class ProjectReader {
             }
             return new ArbitraryProfileWithVoids(outer, voids);
         }
+        Optional<ProfileType> contributedType = extensions.profileType(type);
+        if (contributedType.isPresent()) {
+            return contributedProfile(contributedType.get(), o, p);
+        }
         if (!ProfileTypes.names().contains(type)) {
-            throw fail(tp, "unknown profile type '" + type + "' (use one of " + ProfileTypes.names() + ")");
+            List<String> names = new ArrayList<>(ProfileTypes.names());
+            names.addAll(extensions.profileTypes().keySet());
+            throw fail(tp, "unknown profile type '" + type + "' (use one of " + names + ")");
         }
         List<String> known = ProfileTypes.parameterNames(type);
         Fields f = new Fields(o, p, o.keySet());
@@ -611,6 +679,41 @@ public final class ProjectReader {
         } catch (RuntimeException ex) {
             throw fail(p, type + " cannot be built from these dimensions: " + ex.getMessage());
         }
+    }
+
+    /** A profile of a contributed type: keys checked against its parameter names, then its own validation. */
+    private ProfileDef contributedProfile(ProfileType t, JsonObject o, JsonPath p) throws ProjectFormatException {
+        String type = t.type();
+        List<String> known = t.parameterNames();
+        Fields f = new Fields(o, p, o.keySet());
+        for (String key : o.keySet()) {
+            if (!key.equals("type") && !known.contains(key)) {
+                throw fail(p.child(key), "unknown key '" + StrictJson.abbreviate(key) + "' (" + type + " takes "
+                        + known + ")");
+            }
+        }
+        for (String key : t.requiredParameterNames()) {
+            if (!o.has(key)) {
+                throw fail(p, "missing required key '" + key + "' (" + type + " takes " + known + ")");
+            }
+        }
+        Map<String, Double> parameters = new LinkedHashMap<>();
+        for (String key : known) {
+            parameters.put(key, o.has(key) ? f.number(key) : 0.0);
+        }
+        ProfileDef def;
+        try {
+            def = t.create(Collections.unmodifiableMap(parameters));
+        } catch (IllegalArgumentException ex) {
+            throw rethrow(ex, f);
+        } catch (RuntimeException ex) {
+            throw fail(p, type + " cannot be built from these dimensions: " + ex);
+        }
+        if (def == null || def.region() == null || !type.equals(def.type())) {
+            throw fail(p, "profile type " + type + " (" + t.getClass().getName() + ") returned "
+                    + (def == null ? "no profile" : "a profile of type '" + def.type() + "'"));
+        }
+        return def;
     }
 
     /**

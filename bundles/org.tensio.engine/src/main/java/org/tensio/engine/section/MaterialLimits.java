@@ -11,7 +11,10 @@ import java.util.List;
  * material and the missing key.
  *
  * @param material            material id
- * @param criteria            criteria to check, at least one
+ * @param criteria            built-in criteria to check
+ * @param contributedCriteria ids of contributed criteria to check as well ({@code org.tensio.engine.spi.CheckCriterion},
+ *                            resolved by the check against the engine's extensions); together with
+ *                            {@code criteria} at least one
  * @param partialFactor       γ ≥ 1 dividing strengths (1.0 when not given)
  * @param yieldStrength       fy, or null
  * @param ultimateStrength    fu, or null
@@ -20,12 +23,21 @@ import java.util.List;
  * @param allowableEquivalent given allowable equivalent (von Mises / Tresca) stress, or null
  * @since 0.1
  */
-public record MaterialLimits(String material, List<Criterion> criteria, double partialFactor, Double yieldStrength,
-        Double ultimateStrength, Double allowableNormal, Double allowableShear, Double allowableEquivalent) {
+public record MaterialLimits(String material, List<Criterion> criteria, List<String> contributedCriteria,
+        double partialFactor, Double yieldStrength, Double ultimateStrength, Double allowableNormal,
+        Double allowableShear, Double allowableEquivalent) {
 
-    /** Validates; every criterion must have a capacity. */
+    /** Limits with built-in criteria only. */
+    public MaterialLimits(String material, List<Criterion> criteria, double partialFactor, Double yieldStrength,
+            Double ultimateStrength, Double allowableNormal, Double allowableShear, Double allowableEquivalent) {
+        this(material, criteria, List.of(), partialFactor, yieldStrength, ultimateStrength, allowableNormal,
+                allowableShear, allowableEquivalent);
+    }
+
+    /** Validates; every built-in criterion must have a capacity. */
     public MaterialLimits {
-        if (material == null || criteria == null || criteria.isEmpty()) {
+        contributedCriteria = contributedCriteria == null ? List.of() : List.copyOf(contributedCriteria);
+        if (material == null || criteria == null || criteria.isEmpty() && contributedCriteria.isEmpty()) {
             throw new IllegalArgumentException("materials." + material + ".criteria: at least one criterion is needed");
         }
         criteria = List.copyOf(criteria);

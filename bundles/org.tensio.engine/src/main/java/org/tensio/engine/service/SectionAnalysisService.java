@@ -10,6 +10,7 @@ import org.tensio.engine.io.ProjectFormatException;
 import org.tensio.engine.project.Project;
 import org.tensio.engine.properties.SectionProperties;
 import org.tensio.engine.section.Section;
+import org.tensio.engine.spi.Extensions;
 import org.tensio.engine.stress.PointStress;
 import org.tensio.engine.stress.ShearMethod;
 
@@ -74,8 +75,28 @@ public interface SectionAnalysisService {
      */
     PointStress stressAt(Project project, String stationId, String caseId, Point2 point, ShearMethod shearMethod);
 
-    /** @return a new instance for use outside OSGi */
+    /**
+     * The contributed criteria and profile types this engine accepts besides the built-in ones; the project
+     * reader and the checks use them.
+     *
+     * @return the extensions (none by default)
+     * @since 0.1
+     */
+    default Extensions extensions() {
+        return Extensions.none();
+    }
+
+    /** @return a new instance for use outside OSGi, without contributions */
     static SectionAnalysisService create() {
         return new org.tensio.engine.internal.SectionAnalysisServiceImpl();
+    }
+
+    /**
+     * @param extensions contributions found outside OSGi, e.g. by {@link Extensions#discover(ClassLoader)}
+     * @return a new instance for use outside OSGi that reads and checks with {@code extensions}
+     * @since 0.1
+     */
+    static SectionAnalysisService create(Extensions extensions) {
+        return new org.tensio.engine.internal.SectionAnalysisServiceImpl(extensions);
     }
 }

@@ -17,6 +17,7 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ForkJoinPool;
 
 import org.tensio.engine.section.Section;
+import org.tensio.engine.service.EngineInfo;
 import org.tensio.engine.service.SectionAnalysisService;
 
 /**

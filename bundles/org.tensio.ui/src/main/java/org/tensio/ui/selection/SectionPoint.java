@@ -3,6 +3,9 @@ package org.tensio.ui.selection;
 import java.nio.file.Path;
 import java.util.Objects;
 
+import org.eclipse.core.runtime.IAdaptable;
+import org.eclipse.core.runtime.Platform;
+
 /**
  * A point of a station's cross-section, as the section editor and the result views exchange it through the
  * workbench selection service (as an element of an {@code IStructuredSelection}) and through
@@ -20,7 +23,8 @@ import java.util.Objects;
  * @param y         y, model length units
  * @since 0.1
  */
-public record SectionPoint(Path project, String stationId, String sectionId, String caseId, double x, double y) {
+public record SectionPoint(Path project, String stationId, String sectionId, String caseId, double x, double y)
+        implements IAdaptable {
 
     /** Checks the file, the section id and that the coordinates are finite. */
     public SectionPoint {
@@ -34,5 +38,14 @@ public record SectionPoint(Path project, String stationId, String sectionId, Str
     /** @return the same point for another load case or combination */
     public SectionPoint withCase(String newCaseId) {
         return new SectionPoint(project, stationId, sectionId, newCaseId, x, y);
+    }
+
+    /** @return this when it is an instance of {@code adapter}, else what the platform's adapter factories give */
+    @Override
+    public <T> T getAdapter(Class<T> adapter) {
+        if (adapter.isInstance(this)) {
+            return adapter.cast(this);
+        }
+        return Platform.getAdapterManager().getAdapter(this, adapter);
     }
 }

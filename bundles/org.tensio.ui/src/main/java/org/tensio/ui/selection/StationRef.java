@@ -3,6 +3,9 @@ package org.tensio.ui.selection;
 import java.nio.file.Path;
 import java.util.Objects;
 
+import org.eclipse.core.runtime.IAdaptable;
+import org.eclipse.core.runtime.Platform;
+
 /**
  * A station of a project (and optionally one of its load cases or combinations), as the results tree
  * publishes it through the workbench selection service when a station or case node is selected. The
@@ -13,11 +16,20 @@ import java.util.Objects;
  * @param caseId    the load case or combination, or {@code null}
  * @since 0.1
  */
-public record StationRef(Path project, String stationId, String caseId) {
+public record StationRef(Path project, String stationId, String caseId) implements IAdaptable {
 
     /** Checks the file and the station id. */
     public StationRef {
         Objects.requireNonNull(project, "project");
         Objects.requireNonNull(stationId, "stationId");
+    }
+
+    /** @return this when it is an instance of {@code adapter}, else what the platform's adapter factories give */
+    @Override
+    public <T> T getAdapter(Class<T> adapter) {
+        if (adapter.isInstance(this)) {
+            return adapter.cast(this);
+        }
+        return Platform.getAdapterManager().getAdapter(this, adapter);
     }
 }

@@ -1,4 +1,4 @@
-package org.tensio.engine.verification;
+package org.tensio.engine.service;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -15,16 +15,20 @@ import java.util.jar.Manifest;
  * The engine's version as its bundle manifest states it ({@code Bundle-Version} of {@code org.tensio.engine}):
  * the manifest among the class loader's {@code META-INF/MANIFEST.MF} resources that names the engine (inside
  * OSGi the bundle's own), else the jar or class folder the engine classes came from ({@code target/classes}
- * during the engine's own tests); "unknown" when none can be read.
+ * during the engine's own tests); "unknown" when none can be read. Reports and records print it so that a
+ * result can be tied to the engine that made it.
+ *
+ * @since 0.1
  */
-final class EngineInfo {
+public final class EngineInfo {
 
     private static final String BSN = "org.tensio.engine";
 
     private EngineInfo() {
     }
 
-    static String version() {
+    /** @return the engine's Bundle-Version, e.g. {@code 0.1.0.202612012247}, or {@code "unknown"} */
+    public static String version() {
         try {
             ClassLoader cl = EngineInfo.class.getClassLoader();
             if (cl != null) {
