@@ -125,6 +125,24 @@ assert abs(top["vonMises"]["max"]-250)<1e-9*250
 if run env-text 0 -- envelope "$work/pass.json" --station A && grep -q "von Mises max" "$work/out" && grep -q "Caution" "$work/out"; then
   ok "envelope text"; else bad "envelope text" "$work/out"; fi
 
+# 9b. fatigue rows of the demo: the stable keys, a fatigue object with factors, utilisation = demand / capacity
+demo="$here/docs/examples/demo.tensio.json"
+if run fatigue-json 0 -- check "$demo" --format json && py '
+import json,sys
+d=json.load(open(sys.argv[1]))
+f=[x for x in d["results"] if x["criterion"] in ("fatigueGoodman","fatigueGerber","fatigueAsmeElliptic","fatigueSoderberg","firstCycleYield","langer")]
+assert len(f)==12, len(f)
+for x in f:
+    for k in "station case criterion utilisation demand capacity point".split(): assert k in x, k
+    fa=x["fatigue"]
+    for k in "ka kb kc kd ke kf Se Kt Kts Kf Kfs".split(): assert k in fa["factors"], k
+    assert abs(fa["n"]*x["utilisation"]-1)<1e-12, x
+    assert x["utilisation"]==x["demand"]/x["capacity"], x
+    assert "sensitive" in fa["caution"]
+assert d["maxUtilisation"]==max(x["utilisation"] for x in d["results"])
+assert {x["case"] for x in f}=={"running","start_up"}
+'; then ok "check demo --format json: 12 fatigue rows with factors, n = 1/utilisation"; else bad "fatigue json" "$work/out"; fi
+
 # 10-15. bad input: exit 2, one line naming the field or value, no stack trace
 badcase() { # name, expected substring, args...
   local name=$1 want=$2; shift 2
@@ -138,5 +156,12 @@ badcase bad-format "csv" check "$work/pass.json" --format xml
 badcase env-unknown-station "nowhere" envelope "$work/pass.json" --station nowhere
 badcase env-no-station "station" envelope "$work/pass.json"
 badcase env-bad-limit "--limit" envelope "$work/pass.json" --station A --limit -3
+python3 - "$work/pass.json" "$work/fatigue-bad.json" <<'PY'
+import json,sys
+d=json.load(open(sys.argv[1]))
+d["fatigue"]={"materials":{"S355":{"estimate":"steel","fu":510,"surface":"polished"}},"stations":{"A":{"histories":{"h":{"rotating":"G"}}}}}
+json.dump(d,open(sys.argv[2],"w"))
+PY
+badcase fatigue-bad-surface "fatigue.materials.S355.surface: unknown surface 'polished'" check "$work/fatigue-bad.json"
 
 finish e2e-checks

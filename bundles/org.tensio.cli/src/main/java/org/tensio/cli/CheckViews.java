@@ -15,7 +15,8 @@ import com.google.gson.JsonObject;
 /**
  * Views of a {@link CheckReport}: JSON (stable keys {@code passed, maxUtilisation, results[]{station, case,
  * criterion, utilisation, demand, capacity, point{x, y}}}, plus {@code material, sigmaZ, tauZX, tauZY, singular}
- * per result and {@code units, warnings, caution}), CSV and a text table.
+ * per result, a {@code fatigue} object on fatigue results ({@link FatigueViews}), and {@code units, warnings,
+ * caution}), CSV and a text table.
  */
 final class CheckViews {
 
@@ -45,6 +46,9 @@ final class CheckViews {
             j.addProperty("tauZY", c.tauZY());
             j.addProperty("singular", c.singular());
             j.addProperty("passed", c.passed());
+            if (c.isFatigue()) {
+                j.add("fatigue", FatigueViews.json(c.fatigue()));
+            }
             results.add(j);
         }
         o.add("results", results);
@@ -99,7 +103,8 @@ final class CheckViews {
         String nl = System.lineSeparator();
         StringBuilder sb = new StringBuilder();
         String st = u.stressUnit();
-        sb.append("Static checks (stresses in ").append(st).append(", points in ").append(u.length()).append(')').append(nl);
+        sb.append(r.results().stream().anyMatch(CheckResult::isFatigue) ? "Static and fatigue checks (stresses in "
+                : "Static checks (stresses in ").append(st).append(", points in ").append(u.length()).append(')').append(nl);
         if (r.results().isEmpty()) {
             sb.append("  no checks were performed (see the warnings)").append(nl);
         } else {
@@ -140,6 +145,7 @@ final class CheckViews {
                     coord(gov.point().y(), gov.point().x())))
                     .append(nl);
         }
+        sb.append(FatigueViews.text(r, u));
         for (String w : r.warnings()) {
             sb.append("warning: ").append(w).append(nl);
         }

@@ -56,8 +56,9 @@ import com.google.gson.JsonParser;
  * sections with their profile parameters, stations with the forces of every load case and combination,
  * combinations), then per section a drawing with the finite-element mesh and the exact properties, the table of
  * every check result with the governing one highlighted, and per station the contour plot of the governing case's
- * governing criterion with the stress element and Mohr's circle at the governing point. The caution stands at the
- * top and at the bottom (and in every PDF page footer).
+ * governing criterion with the stress element and Mohr's circle at the governing point, and, when the project has
+ * fatigue checks, the fatigue section ({@link FatigueSection}). The caution stands at the top and at the bottom (and
+ * in every PDF page footer).
  * <p>
  * Files: {@code <name>.report.html} and {@code <name>.report.pdf} in {@code dir}, where {@code <name>} is the
  * project file's name without {@code .tensio.json} (or {@code .json}); each written atomically (a temporary file in
@@ -238,6 +239,7 @@ public final class ReportWriter {
             sections();
             utilisations();
             stations();
+            FatigueSection.add(doc, r, stress, len, this::at);
             ContributedSections.add(doc, contributed, new ReportContext(file, sha, now, p, r, engine));
             doc.add(new Doc.Heading(2, "End of report", "end"));
             doc.add(new Doc.Para("Input file " + file.getFileName() + ", SHA-256 " + sha + "; made " + now
@@ -508,9 +510,12 @@ public final class ReportWriter {
             for (Station st : p.stations().values()) {
                 doc.add(new Doc.Heading(3, "Station " + st.id() + " (section " + st.sectionId() + ")", "station-"
                         + st.id()));
-                CheckResult g = max(r.results().stream().filter(c -> c.station().equals(st.id())).toList());
+                CheckResult g = max(r.results().stream().filter(c -> c.station().equals(st.id()) && !c.isFatigue())
+                        .toList());
                 if (g == null) {
-                    doc.add(new Doc.Para("Not checked (no limits for its material): no governing case to plot.", false));
+                    boolean fatigue = r.results().stream().anyMatch(c -> c.station().equals(st.id()) && c.isFatigue());
+                    doc.add(new Doc.Para(fatigue ? "No static check (no load cases or no limits); see the fatigue"
+                            + " section." : "Not checked (no limits for its material): no governing case to plot.", false));
                     continue;
                 }
                 doc.add(new Doc.Para("Governing: case " + g.caseId() + ", criterion " + g.criterion() + ", material "

@@ -32,6 +32,10 @@ import org.tensio.engine.stress.PointStressOp;
  * listed. A section with several materials therefore gives one result per material and criterion: each
  * material is checked against its own allowables.
  * <p>
+ * Fatigue checks ({@link Project#fatigue()}, {@link FatigueCheckOp}) follow the static ones, as extra results
+ * whose criterion is a {@link org.tensio.engine.fatigue.FatigueCriterion} name and whose case is the load-history
+ * id; {@code passed} and {@code maxUtilisation} cover them too.
+ * <p>
  * Warnings: a material without limits (not checked), a combination a station cannot evaluate (skipped), a
  * composite section's elementary shear, governing points at sharp re-entrant corners (mesh-dependent shear).
  * <p>
@@ -194,6 +198,11 @@ public final class CheckOp {
                         + " refinement; model the fillet instead of trusting those utilisations", st.id(), singularCount,
                         PointStressOp.SINGULAR_RADIUS * section.bounds().diagonal(), String.join(", ", singularAt)));
             }
+        }
+        if (!project.fatigue().isEmpty()) {
+            List<String> fatigueWarnings = new ArrayList<>();
+            results.addAll(new FatigueCheckOp(project, engine, fields).results(fatigueWarnings));
+            warnings.addAll(fatigueWarnings);
         }
         double max = 0;
         boolean passed = true;

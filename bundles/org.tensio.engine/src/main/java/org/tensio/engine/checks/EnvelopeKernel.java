@@ -35,7 +35,14 @@ import org.tensio.engine.loads.InternalForces;
  * case in table order among exact ties; values compare with {@code ==}, so a zero extreme may be reported as
  * −0.0 or +0.0). It does not depend on the tile size, the thread count or skipping.
  * <p>
- * <b>Algorithm.</b> Points are processed in tiles of {@link Options#tile()} consecutive points whose nine
+ * <b>Implementations</b> ({@link Implementation}, {@link Options#implementation()}). The scalar path described
+ * below runs on every JVM; the vector path (the JDK's incubating Vector API) runs when the JVM has the module
+ * {@code jdk.incubator.vector} ({@link #vectorAvailable()}) and is then chosen automatically. Both give the same
+ * values bit for bit and the same governing cases: they evaluate the same fused expressions, take the cases in
+ * the same chunks, merge chunks with the same strict comparison and use the same final pass. Only the number of
+ * skipped point-cases differs. {@link Result#implementation()} says which one ran.
+ * <p>
+ * <b>Algorithm</b> (scalar path). Points are processed in tiles of {@link Options#tile()} consecutive points whose nine
  * coefficient slices are copied once per tile into tile-local arrays (never per case) that stay in the L1/L2
  * cache. Within a tile the cases are processed in chunks of {@link #chunkSize(int)}; per case three short loops run
  * over the tile's points (σz with its running max and min and σz²; τzx² + τzy²; the von Mises square and its
@@ -61,7 +68,8 @@ import org.tensio.engine.loads.InternalForces;
  * <b>Cost.</b> Per point and case 21 floating-point operations (σz: 3 mul + 2 add, τzx and τzy: 6 mul + 4
  * add, the von Mises square: 4 mul + 2 add; 10 of the adds are fused) plus 3 comparisons; 2 more operations
  * and 1 comparison with τmax. Memory: the result arrays (6 or 8 values per point) plus per thread
- * about {@code 17·tile + 4·cases} doubles. Measured throughput: docs/performance.md, "Envelope kernel".
+ * about {@code 17·tile + 4·cases} doubles (vector path: {@code 4·cases} doubles and {@code cases} ints).
+ * Measured throughput: docs/performance.md, "Envelope kernel".
  *
  * @since 0.1
  */
@@ -142,7 +150,10 @@ public final class EnvelopeKernel {
         /** The default tile: 512 points, i.e. 36 KiB of coefficients. */
         public static final int DEFAULT_TILE = 512;
 
-        /** @throws IllegalArgumentException naming the field when tile or threads is out of range or implementation is null */
+        /**
+         * @throws IllegalArgumentException naming the field when tile or threads is out of range or implementation
+         *                                  is null
+         */
         public Options {
             if (tile < 16 || tile > 65_536) {
                 throw new IllegalArgumentException("tile must be 16..65536 points, got " + tile);
@@ -357,7 +368,7 @@ public final class EnvelopeKernel {
                 yield true;
             }
         };
-        // the vector path does not check each value for overflow: it runs only when no value can overflow
+        // the vector path does not check each value for overflow: it runs only when none can overflow
         vector = vector && cannotOverflow(cases);
         Result r = new Result(size, cases.length / COMPONENTS, options.tauMax(),
                 vector ? Implementation.VECTOR : Implementation.SCALAR);

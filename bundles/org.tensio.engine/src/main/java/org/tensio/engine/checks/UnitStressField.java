@@ -8,13 +8,11 @@ import java.util.Locale;
 import org.tensio.engine.fem.FiniteElementSolution;
 import org.tensio.engine.fem.UnitShear;
 import org.tensio.engine.geometry.Point2;
-import org.tensio.engine.loads.ForceComponent;
 import org.tensio.engine.loads.InternalForces;
 import org.tensio.engine.mesh.Mesh;
 import org.tensio.engine.mesh.Singularity;
 import org.tensio.engine.properties.SectionProperties;
 import org.tensio.engine.section.Section;
-import org.tensio.engine.stress.PointStress;
 import org.tensio.engine.stress.PointStressOp;
 import org.tensio.engine.stress.ShearMethod;
 import org.tensio.engine.stress.StressComponents;
@@ -38,8 +36,9 @@ import org.tensio.engine.stress.StressComponents;
  * ({@link SectionProperties#torsionClosedForm()}), otherwise the smoothed finite-element warping field
  * ({@link FiniteElementSolution#unitStresses(Point2, boolean)} at the node);</li>
  * <li>τzx, τzy per unit Vx and Vy: the finite-element shear functions when the solution has them (homogeneous
- * sections); otherwise (composite sections) the elementary shear flow on straight cuts exactly as
- * {@link PointStressOp} computes it (a warning says so).</li>
+ * sections); otherwise (composite sections) the elementary shear flow on straight cuts as
+ * {@link PointStressOp} computes it, each cut computed once per distinct y (and x) of the nodes (a warning says
+ * so).</li>
  * </ul>
  * These are the methods {@link PointStressOp#evaluate(Section, SectionProperties, FiniteElementSolution,
  * ShearMethod, InternalForces, Point2, String, String)} uses with {@link ShearMethod#finiteElement}, which is
@@ -294,6 +293,7 @@ public final class UnitStressField {
                         + " the stress command gives them; the finite-element shear functions are computed for"
                         + " homogeneous sections only");
             }
+            ElementaryShear elementary = feShear ? null : new ElementaryShear(section, props);
             double near = PointStressOp.SINGULAR_RADIUS * section.bounds().diagonal();
             List<Singularity> corners = m.singularities();
             List<Integer> partsHere = new ArrayList<>(np);
@@ -323,7 +323,7 @@ public final class UnitStressField {
                 }
                 double bx = px - xc, by = py - yc;
                 // elementary shear does not depend on the part: the cut's flow is shared
-                double[] elem = feShear ? null : elementaryUnitShear(at);
+                double[] elem = feShear ? null : elementary.at(px, py);
                 UnitShear[] shared = null;
                 for (int p : partsHere) {
                     double n = section.parts().get(p).material().e() / eRef;
@@ -383,18 +383,6 @@ public final class UnitStressField {
                 cy += m.y(m.node(e, k)) / 3;
             }
             return new Point2(px + ONE_SIDED_STEP * (cx - px), py + ONE_SIDED_STEP * (cy - py));
-        }
-
-        /**
-         * {τzx, τzy per unit Vx, τzx, τzy per unit Vy} by the elementary method, taken from {@link PointStressOp}
-         * itself (unit Vx and Vy together: each force's contribution is reported separately).
-         */
-        private double[] elementaryUnitShear(Point2 at) {
-            PointStress ps = PointStressOp.evaluate(section, props, null, ShearMethod.elementary,
-                    new InternalForces(0, 1, 1, 0, 0, 0), at, "", "");
-            StressComponents vx = ps.contributions().get(ForceComponent.VX);
-            StressComponents vy = ps.contributions().get(ForceComponent.VY);
-            return new double[] {vx.tauZX(), vx.tauZY(), vy.tauZX(), vy.tauZY()};
         }
 
         private void alloc(int cap) {

@@ -81,6 +81,8 @@ final class VectorEnvelopeKernel implements VectorSupport.Path {
         /** One vector's running extremes and chunks, read back per lane. */
         final double[] lane;
         final double[] laneChunk;
+        /** Scratch of {@link #extremes}: σz max, σz min, von Mises square max, τmax square max. */
+        final double[] ext = new double[4];
 
         Worker(EnvelopeKernel k, double[] f, EnvelopeKernel.Options o, EnvelopeKernel.Result r, AtomicInteger next,
                 int tiles) {
@@ -144,21 +146,11 @@ final class VectorEnvelopeKernel implements VectorSupport.Path {
             double thMax = Double.POSITIVE_INFINITY, thMin = Double.NEGATIVE_INFINITY;
             double thVm = Double.POSITIVE_INFINITY, thTm = Double.POSITIVE_INFINITY;
             for (int i = p0; i < p1; i++) {
-                double hi = Double.NEGATIVE_INFINITY, lo = Double.POSITIVE_INFINITY;
-                double vm = Double.NEGATIVE_INFINITY, tm = Double.NEGATIVE_INFINITY;
-                for (int c : seeds) {
-                    double s = k.sigmaZ(i, f, c);
-                    hi = Math.max(hi, s);
-                    lo = Math.min(lo, s);
-                    vm = Math.max(vm, k.vonMisesSquare(i, f, c));
-                    if (tau) {
-                        tm = Math.max(tm, k.tauMaxSquare(i, f, c));
-                    }
-                }
-                thMax = Math.min(thMax, hi);
-                thMin = Math.max(thMin, lo);
-                thVm = Math.min(thVm, vm);
-                thTm = Math.min(thTm, tm);
+                extremes(i, seeds, 0, seeds.length);
+                thMax = Math.min(thMax, ext[0]);
+                thMin = Math.max(thMin, ext[1]);
+                thVm = Math.min(thVm, ext[2]);
+                thTm = Math.min(thTm, ext[3]);
             }
             int m = 0;
             for (int ck = 0; ck < chunks; ck++) {
@@ -268,6 +260,30 @@ final class VectorEnvelopeKernel implements VectorSupport.Path {
                     .reinterpretAsDoubles();
         }
 
+        /**
+         * Fills {@link #ext} with the largest and smallest σz, the largest von Mises square and (with τmax) the
+         * largest τmax square at point i over the cases {@code cases[j0..j1)}, with the scalar expressions and
+         * {@link Math#max}/{@link Math#min} as the scalar path folds them.
+         */
+        private void extremes(int i, int[] cases, int j0, int j1) {
+            double hi = Double.NEGATIVE_INFINITY, lo = Double.POSITIVE_INFINITY;
+            double vm = Double.NEGATIVE_INFINITY, tm = Double.NEGATIVE_INFINITY;
+            for (int j = j0; j < j1; j++) {
+                int c = cases[j];
+                double s = k.sigmaZ(i, f, c);
+                hi = Math.max(hi, s);
+                lo = Math.min(lo, s);
+                vm = Math.max(vm, k.vonMisesSquare(i, f, c));
+                if (tau) {
+                    tm = Math.max(tm, k.tauMaxSquare(i, f, c));
+                }
+            }
+            ext[0] = hi;
+            ext[1] = lo;
+            ext[2] = vm;
+            ext[3] = tm;
+        }
+
         /** One point with the scalar expressions, chunk by chunk as the vectors do it. */
         private void scalar(int i) {
             double rHi = Double.NEGATIVE_INFINITY, rLo = Double.POSITIVE_INFINITY;
@@ -278,18 +294,8 @@ final class VectorEnvelopeKernel implements VectorSupport.Path {
                 if (j0 == j1) {
                     continue;
                 }
-                double hi = Double.NEGATIVE_INFINITY, lo = Double.POSITIVE_INFINITY;
-                double vm = Double.NEGATIVE_INFINITY, tm = Double.NEGATIVE_INFINITY;
-                for (int j = j0; j < j1; j++) {
-                    int c = keep[j];
-                    double s = k.sigmaZ(i, f, c);
-                    hi = Math.max(hi, s);
-                    lo = Math.min(lo, s);
-                    vm = Math.max(vm, k.vonMisesSquare(i, f, c));
-                    if (tau) {
-                        tm = Math.max(tm, k.tauMaxSquare(i, f, c));
-                    }
-                }
+                extremes(i, keep, j0, j1);
+                double hi = ext[0], lo = ext[1], vm = ext[2], tm = ext[3];
                 if (hi > rHi) {
                     rHi = hi;
                     kHi = ck;

@@ -24,6 +24,7 @@ import com.google.gson.JsonElement;
 import com.google.gson.JsonObject;
 import com.google.gson.JsonPrimitive;
 
+import org.tensio.engine.fatigue.FatigueData;
 import org.tensio.engine.geometry.ArcSegment;
 import org.tensio.engine.geometry.Contour;
 import org.tensio.engine.geometry.LineSegment;
@@ -111,7 +112,7 @@ public final class ProjectReader {
     public static final int MAX_LOAD_TABLES = 1_000;
 
     static final Set<String> ROOT_KEYS = Set.of("tensio", "name", "description", "units", "materials",
-            "sections", "stations", "loadTables", "combinations");
+            "sections", "stations", "loadTables", "combinations", "fatigue");
     private static final Set<String> UNIT_KEYS = Set.of("length", "force");
     static final Set<String> MATERIAL_KEYS = Set.of("E", "nu", "fy", "fu", "partialFactor", "criteria", "allowable");
     static final Set<String> ALLOWABLE_KEYS = Set.of("normal", "shear", "equivalent");
@@ -311,7 +312,9 @@ public final class ProjectReader {
         Map<String, Combination> combinations = f.has("combinations")
                 ? combinations(f.get("combinations"), root.child("combinations"), stations)
                 : Map.of();
-        return new Project(units, materials, sections, stations, combinations, limits);
+        FatigueData fatigue = f.has("fatigue") ? FatigueReader.read(f.get("fatigue"), root.child("fatigue"), suffix, units,
+                materials, limits, sections, stations, combinations) : FatigueData.NONE;
+        return new Project(units, materials, sections, stations, combinations, limits, fatigue);
     }
 
     private UnitSystem units(Fields root) throws ProjectFormatException {

@@ -50,12 +50,8 @@ public record IShapeProfile(double overallWidth, double overallDepth, double web
         Check.lessThan("flangeThickness", flangeThickness, overallDepth / 2, "half the overallDepth");
         double scale = Math.max(overallWidth, overallDepth);
         double outstand = (overallWidth - webThickness) / 2;
-        Check.atMost("flangeEdgeRadius", flangeEdgeRadius, flangeThickness, scale,
-                "on the flange tip, whose height is the flangeThickness");
-        Check.atMost("flangeEdgeRadius", flangeEdgeRadius, outstand, scale,
-                "on the flange outstand, (overallWidth - webThickness)/2");
-        Check.atMost("filletRadius", filletRadius, outstand - flangeEdgeRadius, scale,
-                "between the web and the flange tip");
+        RoundedOutline.checkFlangeRoundings("flangeEdgeRadius", flangeEdgeRadius, filletRadius, flangeThickness,
+                outstand, "(overallWidth - webThickness)/2", scale);
         Check.atMost("filletRadius", filletRadius, (overallDepth - 2 * flangeThickness) / 2, scale,
                 "along the web between the flanges");
     }
@@ -86,11 +82,10 @@ public record IShapeProfile(double overallWidth, double overallDepth, double web
         double rf = filletRadius;
         double re = flangeEdgeRadius;
         return new Region(new RoundedOutline()
-                .corner(-hx, -hy).corner(hx, -hy)
-                .corner(hx, -yf, re).corner(w, -yf, rf)
-                .corner(w, yf, rf).corner(hx, yf, re)
-                .corner(hx, hy).corner(-hx, hy)
-                .corner(-hx, yf, re).corner(-w, yf, rf)
+                .corner(-hx, -hy)
+                .flangeToWeb(hx, -hy, -yf, w, re, rf)
+                .webToFlange(w, yf, hx, hy, rf, re)
+                .flangeToWeb(-hx, hy, yf, -w, re, rf)
                 .corner(-w, -yf, rf).corner(-hx, -yf, re)
                 .contour());
     }

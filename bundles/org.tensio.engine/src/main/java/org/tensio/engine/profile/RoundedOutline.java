@@ -44,6 +44,39 @@ final class RoundedOutline {
         return this;
     }
 
+    /**
+     * Adds the end of a flange walked from its outer face towards the web: the sharp outer corner of the tip
+     * (tipX, outerY), the tip's inner corner (tipX, innerY) rounded with {@code edgeRadius} and the root corner
+     * (rootX, innerY) with {@code filletRadius}, where the flange's inner face meets the web.
+     */
+    RoundedOutline flangeToWeb(double tipX, double outerY, double innerY, double rootX, double edgeRadius,
+            double filletRadius) {
+        return corner(tipX, outerY).corner(tipX, innerY, edgeRadius).corner(rootX, innerY, filletRadius);
+    }
+
+    /** The same flange end as {@link #flangeToWeb} walked the other way: root, tip's inner corner, outer corner. */
+    RoundedOutline webToFlange(double rootX, double innerY, double tipX, double outerY, double filletRadius,
+            double edgeRadius) {
+        return corner(rootX, innerY, filletRadius).corner(tipX, innerY, edgeRadius).corner(tipX, outerY);
+    }
+
+    /**
+     * The fit of a flange's roundings as the profile records check it, in this order: the edge rounding on the
+     * tip (at most the flange thickness), on the outstand (at most the outstand), and the root fillet between the
+     * web and the tip's rounding (at most outstand − edge radius).
+     *
+     * @param edgeName      the edge radius's parameter name
+     * @param outstandWhere how the outstand is measured, for the message (e.g. "(flangeWidth - webThickness)/2")
+     * @param scale         the profile's size, for the tolerance of {@link Check#atMost}
+     * @throws IllegalArgumentException naming the parameter when a rounding does not fit
+     */
+    static void checkFlangeRoundings(String edgeName, double edgeRadius, double filletRadius, double flangeThickness,
+            double outstand, String outstandWhere, double scale) {
+        Check.atMost(edgeName, edgeRadius, flangeThickness, scale, "on the flange tip, whose height is the flangeThickness");
+        Check.atMost(edgeName, edgeRadius, outstand, scale, "on the flange outstand, " + outstandWhere);
+        Check.atMost("filletRadius", filletRadius, outstand - edgeRadius, scale, "between the web and the flange tip");
+    }
+
     /** @return the closed chain of line and arc segments */
     Contour contour() {
         int n = corners.size();

@@ -53,12 +53,8 @@ public record TShapeProfile(double depth, double flangeWidth, double webThicknes
         double webLength = depth - flangeThickness;
         Check.atMost("webEdgeRadius", webEdgeRadius, webThickness / 2, scale, "across the web toe, webThickness/2");
         Check.atMost("webEdgeRadius", webEdgeRadius, webLength, scale, "along the web, depth - flangeThickness");
-        Check.atMost("flangeEdgeRadius", flangeEdgeRadius, flangeThickness, scale,
-                "on the flange tip, whose height is the flangeThickness");
-        Check.atMost("flangeEdgeRadius", flangeEdgeRadius, outstand, scale,
-                "on the flange outstand, (flangeWidth - webThickness)/2");
-        Check.atMost("filletRadius", filletRadius, outstand - flangeEdgeRadius, scale,
-                "between the web and the flange tip");
+        RoundedOutline.checkFlangeRoundings("flangeEdgeRadius", flangeEdgeRadius, filletRadius, flangeThickness,
+                outstand, "(flangeWidth - webThickness)/2", scale);
         Check.atMost("filletRadius", filletRadius, webLength - webEdgeRadius, scale,
                 "between the flange and the web toe");
     }
@@ -82,9 +78,8 @@ public record TShapeProfile(double depth, double flangeWidth, double webThicknes
         double yf = hy - flangeThickness;
         return new Region(new RoundedOutline()
                 .corner(-w, -hy, webEdgeRadius).corner(w, -hy, webEdgeRadius)
-                .corner(w, yf, filletRadius).corner(hx, yf, flangeEdgeRadius)
-                .corner(hx, hy).corner(-hx, hy)
-                .corner(-hx, yf, flangeEdgeRadius).corner(-w, yf, filletRadius)
+                .webToFlange(w, yf, hx, hy, filletRadius, flangeEdgeRadius)
+                .flangeToWeb(-hx, hy, yf, -w, flangeEdgeRadius, filletRadius)
                 .contour());
     }
 

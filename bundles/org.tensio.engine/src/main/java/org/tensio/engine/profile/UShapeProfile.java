@@ -46,10 +46,8 @@ public record UShapeProfile(double depth, double flangeWidth, double webThicknes
         Check.lessThan("webThickness", webThickness, flangeWidth, "the flangeWidth");
         double scale = Math.max(depth, flangeWidth);
         double outstand = flangeWidth - webThickness;
-        Check.atMost("edgeRadius", edgeRadius, flangeThickness, scale,
-                "on the flange tip, whose height is the flangeThickness");
-        Check.atMost("edgeRadius", edgeRadius, outstand, scale, "on the flange outstand, flangeWidth - webThickness");
-        Check.atMost("filletRadius", filletRadius, outstand - edgeRadius, scale, "between the web and the flange tip");
+        RoundedOutline.checkFlangeRoundings("edgeRadius", edgeRadius, filletRadius, flangeThickness, outstand,
+                "flangeWidth - webThickness", scale);
         Check.atMost("filletRadius", filletRadius, (depth - 2 * flangeThickness) / 2, scale,
                 "along the web between the flanges");
     }
@@ -72,10 +70,10 @@ public record UShapeProfile(double depth, double flangeWidth, double webThicknes
         double xw = -hx + webThickness;
         double yf = hy - flangeThickness;
         return new Region(new RoundedOutline()
-                .corner(-hx, -hy).corner(hx, -hy)
-                .corner(hx, -yf, edgeRadius).corner(xw, -yf, filletRadius)
-                .corner(xw, yf, filletRadius).corner(hx, yf, edgeRadius)
-                .corner(hx, hy).corner(-hx, hy)
+                .corner(-hx, -hy)
+                .flangeToWeb(hx, -hy, -yf, xw, edgeRadius, filletRadius)
+                .webToFlange(xw, yf, hx, hy, filletRadius, edgeRadius)
+                .corner(-hx, hy)
                 .contour());
     }
 

@@ -53,10 +53,8 @@ public record ZShapeProfile(double depth, double flangeWidth, double webThicknes
         Check.lessThan("webThickness", webThickness, flangeWidth, "the flangeWidth");
         double scale = Math.max(depth, 2 * flangeWidth);
         double outstand = flangeWidth - webThickness;
-        Check.atMost("edgeRadius", edgeRadius, flangeThickness, scale,
-                "on the flange tip, whose height is the flangeThickness");
-        Check.atMost("edgeRadius", edgeRadius, outstand, scale, "on the flange outstand, flangeWidth - webThickness");
-        Check.atMost("filletRadius", filletRadius, outstand - edgeRadius, scale, "between the web and the flange tip");
+        RoundedOutline.checkFlangeRoundings("edgeRadius", edgeRadius, filletRadius, flangeThickness, outstand,
+                "flangeWidth - webThickness", scale);
         Check.atMost("filletRadius", filletRadius, depth - flangeThickness, scale,
                 "along the web, depth - flangeThickness");
     }
@@ -79,10 +77,10 @@ public record ZShapeProfile(double depth, double flangeWidth, double webThicknes
         double hy = depth / 2;
         double yf = hy - flangeThickness;
         return new Region(new RoundedOutline()
-                .corner(-w, -hy).corner(tip, -hy)
-                .corner(tip, -yf, edgeRadius).corner(w, -yf, filletRadius)
-                .corner(w, hy).corner(-tip, hy)
-                .corner(-tip, yf, edgeRadius).corner(-w, yf, filletRadius)
+                .corner(-w, -hy)
+                .flangeToWeb(tip, -hy, -yf, w, edgeRadius, filletRadius)
+                .corner(w, hy)
+                .flangeToWeb(-tip, hy, yf, -w, edgeRadius, filletRadius)
                 .contour());
     }
 

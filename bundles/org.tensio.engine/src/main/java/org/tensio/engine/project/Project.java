@@ -4,6 +4,7 @@ import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
 
+import org.tensio.engine.fatigue.FatigueData;
 import org.tensio.engine.loads.InternalForces;
 import org.tensio.engine.section.Material;
 import org.tensio.engine.section.MaterialLimits;
@@ -21,10 +22,18 @@ import org.tensio.engine.units.UnitSystem;
  * @param combinations combinations by id
  * @param limits       what each material is checked against, by material id (materials without an entry are
  *                     not checked)
+ * @param fatigue      the fatigue checks of the project ({@link FatigueData#NONE} when it has none)
  * @since 0.1
  */
 public record Project(UnitSystem units, Map<String, Material> materials, Map<String, Section> sections,
-        Map<String, Station> stations, Map<String, Combination> combinations, Map<String, MaterialLimits> limits) {
+        Map<String, Station> stations, Map<String, Combination> combinations, Map<String, MaterialLimits> limits,
+        FatigueData fatigue) {
+
+    /** A project without fatigue checks. */
+    public Project(UnitSystem units, Map<String, Material> materials, Map<String, Section> sections,
+            Map<String, Station> stations, Map<String, Combination> combinations, Map<String, MaterialLimits> limits) {
+        this(units, materials, sections, stations, combinations, limits, FatigueData.NONE);
+    }
 
     /** A project without check limits. */
     public Project(UnitSystem units, Map<String, Material> materials, Map<String, Section> sections,
@@ -32,8 +41,9 @@ public record Project(UnitSystem units, Map<String, Material> materials, Map<Str
         this(units, materials, sections, stations, combinations, Map.of());
     }
 
-    /** Copies the maps. */
+    /** Copies the maps; a null {@code fatigue} is {@link FatigueData#NONE}. */
     public Project {
+        fatigue = fatigue == null ? FatigueData.NONE : fatigue;
         limits = Collections.unmodifiableMap(new LinkedHashMap<>(limits));
         materials = Collections.unmodifiableMap(new LinkedHashMap<>(materials));
         sections = Collections.unmodifiableMap(new LinkedHashMap<>(sections));

@@ -33,7 +33,8 @@ import org.tensio.engine.units.UnitSystem;
  * {@code stress.C(x=..,y=..[,N=..][,Vx=..][,Vy=..][,Mx=..][,My=..][,T=..][,shear=elementary|finiteElement])}
  * with C one of {@code sigmaZ tauZX tauZY tau sigma1 sigma2 sigma3 tauMax vonMises tresca}, from
  * {@link SectionAnalysisService#stressAt(Project, String, String, Point2, ShearMethod)} on a one-station project
- * (shear by the finite-element method unless the case says otherwise, as the command line's default).</li>
+ * (shear by the finite-element method unless the case says otherwise, as the command line's default);</li>
+ * <li>fatigue quantities {@code fatigue.C(...)}, see {@link FatigueQuantities}.</li>
  * </ul>
  * Units: mm, N, MPa, degrees.
  */
@@ -56,6 +57,14 @@ final class Quantity {
                 properties = service.properties(section);
             }
             return properties;
+        }
+
+        SectionAnalysisService service() {
+            return service;
+        }
+
+        Section section() {
+            return section;
         }
 
         FiniteElementSolution solution() {
@@ -149,7 +158,7 @@ final class Quantity {
     final String computedBy;
     private final ToDoubleFunction<Context> f;
 
-    private Quantity(String description, String unit, String computedBy, ToDoubleFunction<Context> f) {
+    Quantity(String description, String unit, String computedBy, ToDoubleFunction<Context> f) {
         this.description = description;
         this.unit = unit;
         this.computedBy = computedBy;
@@ -169,6 +178,9 @@ final class Quantity {
         Def d = NAMED.get(spec);
         if (d != null) {
             return new Quantity(d.description, d.unit, d.call, d.f);
+        }
+        if (spec.startsWith("fatigue.") && spec.endsWith(")") && spec.indexOf('(') > 0) {
+            return FatigueQuantities.parse(spec, vars);
         }
         if (spec.startsWith("stress.") && spec.endsWith(")") && spec.indexOf('(') > 0) {
             return stress(spec, vars);

@@ -46,7 +46,8 @@ public final class VerificationRunner {
 
     /** The fixture families, in record order (resources {@code verification/<name>} of the engine bundle). */
     public static final List<String> FIXTURES = List.of("closed-form.txt", "rolled-section-table.txt", "torsion.txt",
-            "thin-walled.txt", "shear.txt", "elementary-shear.txt", "combined-loading.txt", "unsymmetric-bending.txt");
+            "thin-walled.txt", "shear.txt", "elementary-shear.txt", "combined-loading.txt", "unsymmetric-bending.txt",
+            "fatigue.txt");
 
     /** The unit system of every case. */
     public static final String UNITS = "mm, N, MPa; angles in degrees";

@@ -61,8 +61,9 @@ class ProjectReaderTest {
         assertEquals(List.of("C45_QT", "E355", "S355", "EN_AW_6082_T6"), List.copyOf(p.materials().keySet()));
         assertEquals(List.of("drive_shaft", "idler_axle", "platform_beam", "bracket", "guide_rail"),
                 List.copyOf(p.sections().keySet()));
-        assertEquals(5, p.stations().size());
+        assertEquals(6, p.stations().size());
         assertEquals(List.of("ULS", "SLS"), List.copyOf(p.combinations().keySet()));
+        assertEquals(List.of("drive_shaft_sprocket"), List.copyOf(p.fatigue().stations().keySet()));
 
         assertEquals(new CircleProfile(30), p.section("drive_shaft").parts().get(0).profile());
         assertEquals(new IShapeProfile(150, 300, 7.1, 10.7, 15, 0), p.section("platform_beam").parts().get(0).profile());

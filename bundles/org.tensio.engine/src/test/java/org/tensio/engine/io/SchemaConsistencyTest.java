@@ -84,6 +84,38 @@ class SchemaConsistencyTest {
     }
 
     @Test
+    void fatigueKeysMatchTheReader() throws IOException {
+        JsonObject defs = schema().getAsJsonObject("$defs");
+        assertEquals(new java.util.TreeSet<>(FatigueReader.FATIGUE_KEYS), keys(defs.getAsJsonObject("fatigue")));
+        assertEquals(new java.util.TreeSet<>(FatigueReader.MATERIAL_KEYS), keys(defs.getAsJsonObject("fatigueMaterial")));
+        assertEquals(new java.util.TreeSet<>(FatigueReader.STATION_KEYS), keys(defs.getAsJsonObject("fatigueStation")));
+        assertEquals(new java.util.TreeSet<>(FatigueReader.HISTORY_KEYS), keys(defs.getAsJsonObject("loadHistory")));
+        assertEquals(new java.util.TreeSet<>(FatigueReader.NOTCH_KEYS), keys(defs.getAsJsonObject("notch")));
+        List<String> criteria = new ArrayList<>();
+        for (org.tensio.engine.fatigue.FatigueCriterion c : org.tensio.engine.fatigue.FatigueCriterion.values()) {
+            criteria.add(c.name());
+        }
+        assertEquals(criteria, strings(defs.getAsJsonObject("fatigueStation").getAsJsonObject("properties")
+                .getAsJsonObject("criteria").getAsJsonObject("items").get("enum")));
+        List<String> notches = new ArrayList<>();
+        for (org.tensio.engine.fatigue.NotchType t : org.tensio.engine.fatigue.NotchType.values()) {
+            notches.add(t.name());
+        }
+        assertEquals(notches, strings(defs.getAsJsonObject("notch").getAsJsonObject("properties")
+                .getAsJsonObject("type").get("enum")));
+        List<String> finishes = new ArrayList<>();
+        for (org.tensio.engine.fatigue.SurfaceFinish f : org.tensio.engine.fatigue.SurfaceFinish.values()) {
+            finishes.add(f.name());
+        }
+        assertEquals(finishes, strings(defs.getAsJsonObject("fatigueStation").getAsJsonObject("properties")
+                .getAsJsonObject("surface").get("enum")));
+        List<Double> reliabilities = new ArrayList<>();
+        defs.getAsJsonObject("fatigueMaterial").getAsJsonObject("properties").getAsJsonObject("reliability")
+                .getAsJsonArray("enum").forEach(e -> reliabilities.add(e.getAsDouble()));
+        assertEquals(org.tensio.engine.fatigue.MarinFactors.RELIABILITIES, reliabilities);
+    }
+
+    @Test
     void criteriaMatchTheEngine() throws IOException {
         JsonObject criteria = schema().getAsJsonObject("$defs").getAsJsonObject("material")
                 .getAsJsonObject("properties").getAsJsonObject("criteria");
