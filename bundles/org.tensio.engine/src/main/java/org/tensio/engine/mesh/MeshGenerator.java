@@ -469,7 +469,18 @@ public final class MeshGenerator {
                 if (m == null) {
                     m = nc + mids.size();
                     mid.put(key, m);
-                    mids.add(midPoint(a, b, cx, cy, params, constrained.contains(key)));
+                    double[] mp = midPoint(a, b, cx, cy, params, constrained.contains(key));
+                    // a mid-node moved onto an arc far from its chord, relative to the element's height over that
+                    // edge, inverts the curved element (found by the robustness suite): triangulate again
+                    int c = t[(k + 2) % 3];
+                    double ex = cx[b] - cx[a], ey = cy[b] - cy[a], len = Math.hypot(ex, ey);
+                    double height = Math.abs(ex * (cy[c] - cy[a]) - ey * (cx[c] - cx[a])) / len;
+                    double sagitta = Math.hypot(mp[0] - 0.5 * (cx[a] + cx[b]), mp[1] - 0.5 * (cy[a] + cy[b]));
+                    if (sagitta > 0.25 * height) {
+                        throw new DegenerateTriangulation("a curved element would invert at (" + mp[0] + ", " + mp[1]
+                                + ")");
+                    }
+                    mids.add(mp);
                 }
                 elements[6 * e + k] = t[k];
                 elements[6 * e + 3 + k] = m;

@@ -253,7 +253,7 @@ final class Mutator {
         segs.add(renamed);
         copy = with(copy, segs, n.value.deepCopy());
         String p = path(segs);
-        if (isIdMap(parent)) {
+        if (isIdMap(parent) || "fatigue".equals(n.segs.get(0))) { // the fatigue block has id maps of its own
             return new Mutation(copy.toString(), "rename id " + path(n.segs) + " → " + renamed, PathRule.ANY, false);
         }
         String parentPath = path(parent);
@@ -322,8 +322,9 @@ final class Mutator {
         u.addProperty("force", f);
         boolean valid = List.of("mm", "cm", "m", "in", "ft").contains(l) && List.of("N", "kN", "MN", "lbf", "kip")
                 .contains(f);
-        return new Mutation(with(root, List.of("units"), u).toString(), "units " + l + "/" + f,
-                PathRule.atOrAbove("$.units." + (List.of("mm", "cm", "m", "in", "ft").contains(l) ? "force" : "length")),
-                !valid);
+        // valid units may make unit-dependent rules (e.g. fatigue fits in MPa) reject values elsewhere: any place
+        PathRule rule = valid ? PathRule.ANY
+                : PathRule.atOrAbove("$.units." + (List.of("mm", "cm", "m", "in", "ft").contains(l) ? "force" : "length"));
+        return new Mutation(with(root, List.of("units"), u).toString(), "units " + l + "/" + f, rule, !valid);
     }
 }
