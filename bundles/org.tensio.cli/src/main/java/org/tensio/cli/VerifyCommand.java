@@ -5,11 +5,9 @@ import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.StandardOpenOption;
-import java.security.SecureRandom;
 import java.util.concurrent.Callable;
 
+import org.tensio.engine.io.AtomicFiles;
 import org.tensio.engine.service.SectionAnalysisService;
 import org.tensio.engine.verification.RecordFormat;
 import org.tensio.engine.verification.VerificationRecord;
@@ -22,16 +20,14 @@ import picocli.CommandLine.Spec;
 /**
  * {@code tensio verify [--format text|json|csv|html] [--output FILE]}: runs the engine's published check cases
  * and writes the verification record (every case's quantity, value, reference and its source, errors,
- * tolerance and why, pass/fail; engine version, UTC date, Java, OS, caution) to stdout or, atomically (a
- * temporary file in the same folder, then ATOMIC_MOVE over the target), to FILE. Exit codes: 0 every case
- * passed, 1 some case failed, 2 bad usage (e.g. FILE's folder does not exist).
+ * tolerance and why, pass/fail; engine version, UTC date, Java, OS, caution) to stdout or, atomically
+ * ({@link AtomicFiles}: a temporary file in the same folder, fsync, then ATOMIC_MOVE over the target), to FILE.
+ * Exit codes: 0 every case passed, 1 some case failed, 2 bad usage (e.g. FILE's folder does not exist).
  */
 @Command(name = "verify", mixinStandardHelpOptions = true,
         description = "Run the engine's published check cases and write the verification record"
                 + " (exit 0: all pass, 1: some case failed, 2: bad usage).")
 final class VerifyCommand implements Callable<Integer> {
-
-    private static final SecureRandom RANDOM = new SecureRandom();
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -73,17 +69,10 @@ final class VerifyCommand implements Callable<Integer> {
         return abs;
     }
 
-    /** A temporary file beside the target, then a rename over it: readers see the old file or the whole new one. */
+    /** Through the engine's atomic writer: readers see the old file or the whole new one, never a partial one. */
     private static void writeAtomically(Path target, byte[] bytes) {
-        Path tmp = target.resolveSibling("." + target.getFileName() + "." + Long.toUnsignedString(RANDOM.nextLong(), 36)
-                + ".tmp");
         try {
-            try {
-                Files.write(tmp, bytes, StandardOpenOption.CREATE_NEW, StandardOpenOption.WRITE);
-                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } finally {
-                Files.deleteIfExists(tmp);
-            }
+            AtomicFiles.write(target, bytes);
         } catch (IOException e) {
             throw new IllegalArgumentException("--output: cannot write '" + target + "': " + e, e);
         }

@@ -26,6 +26,7 @@ import org.tensio.engine.fem.FiniteElementSolution;
 import org.tensio.engine.geometry.ArcSegment;
 import org.tensio.engine.geometry.Contour;
 import org.tensio.engine.geometry.Segment;
+import org.tensio.engine.io.AtomicFiles;
 import org.tensio.engine.loads.InternalForces;
 import org.tensio.engine.mesh.Mesh;
 import org.tensio.engine.project.Combination;

@@ -163,6 +163,13 @@ public final class CheckOp {
                                 continue;
                             }
                             double d = demand.at(s[i], tx[i], ty[i]);
+                            if (!Double.isFinite(d / capacity)) {
+                                throw new IllegalArgumentException("station '" + st.id() + "', case '" + caseId
+                                        + "': the " + names.get(j) + " utilisation of material '" + keys.get(k)
+                                        + "' at (" + f.x(i) + ", " + f.y(i) + ") is not a finite number (demand " + d
+                                        + ", capacity " + capacity + "): forces, dimensions, moduli and strengths are "
+                                        + "too far apart in magnitude for double arithmetic; check their values and units");
+                            }
                             if (d > bestD || Double.isNaN(d) && !Double.isNaN(bestD)) {
                                 bestD = d;
                                 best = i;

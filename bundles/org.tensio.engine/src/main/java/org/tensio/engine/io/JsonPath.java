@@ -32,6 +32,11 @@ final class JsonPath {
         return new JsonPath(this, key, -1);
     }
 
+    /** @return the path of the value that holds this one; the root for the root */
+    JsonPath parent() {
+        return parent == null ? this : parent;
+    }
+
     /** @return the path of item {@code i} of the array at this path */
     JsonPath item(int i) {
         return new JsonPath(this, null, i);

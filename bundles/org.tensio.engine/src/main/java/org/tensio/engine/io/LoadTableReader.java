@@ -30,7 +30,7 @@ import org.tensio.engine.units.UnitSystem;
  * The file is streamed (never held whole in memory), decoded as strict UTF-8, split by {@link CsvReader}, and
  * every number is checked by a hand-written scanner before it is converted (no regular expression per cell).
  * Limits: at most {@value #MAX_BYTES} bytes (64 MiB, checked before reading and while reading) and at most
- * {@value #MAX_ROWS} data rows. Every error is a {@link ProjectFormatException} at the table's {@code file}
+ * {@value #MAX_ROWS} data rows; the project at most {@value #MAX_STATION_CASES} station load cases in all. Every error is a {@link ProjectFormatException} at the table's {@code file}
  * key (or at the {@code columns} key concerned) whose message names the file, the 1-based row and the column
  * header, e.g. {@code loads.csv row 1532, column 'Fz': '1.2.3' is not a number}.
  * <p>
@@ -43,6 +43,8 @@ final class LoadTableReader {
     static final long MAX_BYTES = 64L * 1024 * 1024;
     /** Most data rows (non-blank rows after the header) accepted in one table. */
     static final int MAX_ROWS = 1_000_000;
+    /** Most station load cases (station × case pairs) of a project, the file's and all tables' together. */
+    static final int MAX_STATION_CASES = 1_000_000;
     /** The Tensio column keys: station, case, then the force components in {@link ForceComponent} order. */
     static final List<String> COLUMN_KEYS = List.of("station", "case", "N", "Vx", "Vy", "Mx", "My", "T");
 
@@ -275,6 +277,10 @@ final class LoadTableReader {
         }
         Map<String, String> caseIds = new HashMap<>();
         int dataRows = 0;
+        long stationCases = 0;
+        for (StationCases sc : stations.values()) {
+            stationCases += sc.cases.size();
+        }
         while (csv.next()) {
             if (csv.isBlank()) {
                 continue;
@@ -340,17 +346,23 @@ final class LoadTableReader {
                             + "double");
                 }
                 double value = raw * factor[k - FIRST_COMPONENT];
-                if (!Double.isFinite(value)) {
-                    throw fail(filePath, cell(row, header[k]) + "'" + abbreviate(text) + "' is too large after "
-                            + "conversion to the project's units");
+                if (!(Math.abs(value) <= ProjectReader.MAX_ABS_FORCE)) {
+                    throw fail(filePath, cell(row, header[k]) + "'" + abbreviate(text) + "' is beyond ±1e30 after "
+                            + "conversion to the project's units and scaling (far beyond any real force or moment)");
                 }
                 v[k] = value + 0.0; // -0.0 (a "-0.000" cell, or 0 times a negative scale) becomes 0
+            }
+            if (stationCases >= MAX_STATION_CASES) {
+                throw fail(filePath, name() + " row " + row + ": the project would have more than "
+                        + MAX_STATION_CASES + " station load cases (the limit, the project file's and all tables' "
+                        + "together)");
             }
             if (!target.addTableCase(caseId, new InternalForces(v[2], v[3], v[4], v[5], v[6], v[7]), spec.index(),
                     row)) {
                 throw fail(filePath, cell(row, header[CASE]) + "station '" + abbreviate(station) + "' has load case '"
                         + abbreviate(caseId) + "' twice: here and at " + describe(target.origin(caseId), target, caseId));
             }
+            stationCases++;
         }
     }
 

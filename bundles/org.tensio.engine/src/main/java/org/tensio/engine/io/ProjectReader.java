@@ -71,7 +71,10 @@ import org.tensio.engine.units.UnitSystem;
  * <p>
  * Limits: files of at most {@value #MAX_FILE_BYTES} bytes (16 MiB), nesting at most {@value #MAX_DEPTH}
  * levels, at most {@value #MAX_LOOP_VERTICES} vertices in one loop; load tables of at most
- * {@value #MAX_TABLE_BYTES} bytes (64 MiB) and {@value #MAX_TABLE_ROWS} data rows each.
+ * {@value #MAX_TABLE_BYTES} bytes (64 MiB) and {@value #MAX_TABLE_ROWS} data rows each, at most
+ * {@value #MAX_LOAD_TABLES} of them; at most {@value #MAX_STATIONS} stations, {@value #MAX_STATION_CASES} station
+ * load cases in all and {@value #MAX_COMBINATIONS} combinations. (Meshing has its own limits and a memory
+ * estimate: {@link org.tensio.engine.mesh.MeshBudget}.)
  * <p>
  * Single use; the static methods are the entry points. Thread-safe in that each call has its own state.
  *
@@ -91,6 +94,22 @@ public final class ProjectReader {
     public static final long MAX_TABLE_BYTES = LoadTableReader.MAX_BYTES;
     /** Most data rows (non-blank rows after the header) accepted in one load table. */
     public static final int MAX_TABLE_ROWS = LoadTableReader.MAX_ROWS;
+    /** Most stations accepted. */
+    public static final int MAX_STATIONS = 100_000;
+    /** Most station load cases (station × load-case pairs) accepted, the file's and the load tables' together. */
+    public static final int MAX_STATION_CASES = LoadTableReader.MAX_STATION_CASES;
+    /** Most combinations accepted. */
+    public static final int MAX_COMBINATIONS = 10_000;
+    /** Longest id (of a material, section, station, load case or combination) accepted, characters. */
+    public static final int MAX_ID_LENGTH = 200;
+    /**
+     * Largest magnitude of a force or moment component accepted (file, load tables and combinations), force or
+     * force·length: with section sizes of at least {@link SectionValidator#MIN_SIZE} it keeps stresses far inside
+     * the double range.
+     */
+    public static final double MAX_ABS_FORCE = 1e30;
+    /** Most load tables accepted. */
+    public static final int MAX_LOAD_TABLES = 1_000;
 
     static final Set<String> ROOT_KEYS = Set.of("tensio", "name", "description", "units", "materials",
             "sections", "stations", "loadTables", "combinations", "fatigue");
@@ -832,7 +851,12 @@ public final class ProjectReader {
     private Map<String, StationCases> stations(JsonElement e, JsonPath p, Map<String, Section> sections)
             throws ProjectFormatException {
         Map<String, StationCases> out = new LinkedHashMap<>();
-        for (Map.Entry<String, JsonElement> s : object(e, p).entrySet()) {
+        JsonObject all = object(e, p);
+        if (all.size() > MAX_STATIONS) {
+            throw fail(p, all.size() + " stations, more than the limit of " + MAX_STATIONS);
+        }
+        long stationCases = 0;
+        for (Map.Entry<String, JsonElement> s : all.entrySet()) {
             JsonPath sp = p.child(s.getKey());
             String id = id(s.getKey(), sp, "station");
             Fields f = new Fields(object(s.getValue(), sp), sp, STATION_KEYS);
@@ -844,6 +868,10 @@ public final class ProjectReader {
             JsonPath fp = sp.child("forces");
             StationCases station = new StationCases(id, sectionId, sp, f.has("forces"));
             JsonObject forces = f.has("forces") ? object(f.get("forces"), fp) : new JsonObject();
+            stationCases += forces.size();
+            if (stationCases > MAX_STATION_CASES) {
+                throw fail(fp, "more than " + MAX_STATION_CASES + " station load cases in the project (the limit)");
+            }
             for (Map.Entry<String, JsonElement> c : forces.entrySet()) {
                 JsonPath cp = fp.child(c.getKey());
                 String caseId = id(c.getKey(), cp, "load case");
@@ -852,6 +880,10 @@ public final class ProjectReader {
                 String[] keys = {"N", "Vx", "Vy", "Mx", "My", "T"};
                 for (int i = 0; i < keys.length; i++) {
                     v[i] = cf.has(keys[i]) ? cf.number(keys[i]) : 0;
+                    if (!(Math.abs(v[i]) <= MAX_ABS_FORCE)) {
+                        throw fail(cp.child(keys[i]), keys[i] + ": " + fmt(v[i]) + " is beyond ±" + fmt(MAX_ABS_FORCE)
+                                + " (far beyond any real force or moment in any unit system; check the value and units)");
+                    }
                 }
                 try {
                     station.addFileCase(caseId, new InternalForces(v[0], v[1], v[2], v[3], v[4], v[5]));
@@ -869,6 +901,9 @@ public final class ProjectReader {
     private void loadTables(JsonElement e, JsonPath p, UnitSystem projectUnits, Map<String, StationCases> stations)
             throws ProjectFormatException {
         JsonArray list = array(e, p);
+        if (list.size() > MAX_LOAD_TABLES) {
+            throw fail(p, list.size() + " load tables, more than the limit of " + MAX_LOAD_TABLES);
+        }
         List<LoadTableReader.Spec> specs = new ArrayList<>(list.size());
         for (int i = 0; i < list.size(); i++) {
             specs.add(loadTable(i, list.get(i), p.item(i), projectUnits));
@@ -994,7 +1029,12 @@ public final class ProjectReader {
             cases.addAll(s.cases().keySet());
         }
         Map<String, Combination> out = new LinkedHashMap<>();
-        for (Map.Entry<String, JsonElement> c : object(e, p).entrySet()) {
+        Map<String, double[]> largest = largestForces(stations);
+        JsonObject all = object(e, p);
+        if (all.size() > MAX_COMBINATIONS) {
+            throw fail(p, all.size() + " combinations, more than the limit of " + MAX_COMBINATIONS);
+        }
+        for (Map.Entry<String, JsonElement> c : all.entrySet()) {
             JsonPath cp = p.child(c.getKey());
             String id = id(c.getKey(), cp, "combination");
             if (cases.contains(id)) {
@@ -1019,8 +1059,53 @@ public final class ProjectReader {
             } catch (IllegalArgumentException ex) {
                 throw fail(cp, ex.getMessage());
             }
+            requireFiniteSums(id, map, cp, stations, largest);
         }
         return out;
+    }
+
+    /** @return per load case, the largest |component| of its forces over all stations, in ForceComponent order */
+    private static Map<String, double[]> largestForces(Map<String, Station> stations) {
+        Map<String, double[]> out = new java.util.HashMap<>();
+        for (Station s : stations.values()) {
+            for (Map.Entry<String, InternalForces> c : s.cases().entrySet()) {
+                double[] m = out.computeIfAbsent(c.getKey(), k -> new double[ForceComponent.values().length]);
+                for (ForceComponent fc : ForceComponent.values()) {
+                    m[fc.ordinal()] = Math.max(m[fc.ordinal()], Math.abs(c.getValue().get(fc)));
+                }
+            }
+        }
+        return out;
+    }
+
+    /**
+     * Rejects a combination whose forces exceed {@link #MAX_ABS_FORCE} at some station (huge factors or forces): the
+     * sum of |factor| × the largest |force| bounds every station's combined force, and only when that bound
+     * exceeds the limit are the stations summed one by one to name the first that does.
+     */
+    private void requireFiniteSums(String id, Map<String, Double> factors, JsonPath cp, Map<String, Station> stations,
+            Map<String, double[]> largest) throws ProjectFormatException {
+        for (ForceComponent fc : ForceComponent.values()) {
+            double bound = 0;
+            for (Map.Entry<String, Double> f : factors.entrySet()) {
+                bound += Math.abs(f.getValue()) * largest.get(f.getKey())[fc.ordinal()];
+            }
+            if (bound <= MAX_ABS_FORCE) {
+                continue;
+            }
+            for (Station s : stations.values()) {
+                double sum = 0;
+                for (Map.Entry<String, Double> f : factors.entrySet()) {
+                    InternalForces lc = s.cases().get(f.getKey());
+                    sum += lc == null ? 0 : f.getValue() * lc.get(fc);
+                }
+                if (!(Math.abs(sum) <= MAX_ABS_FORCE)) {
+                    throw fail(cp, "combination '" + id + "' gives " + fc.key() + " = " + sum + " at station '"
+                            + s.id() + "', beyond ±" + fmt(MAX_ABS_FORCE) + " (check the factors' and the forces' "
+                            + "magnitudes and units)");
+                }
+            }
+        }
     }
 
     // ---------------------------------------------------------------- typed access
@@ -1113,8 +1198,12 @@ public final class ProjectReader {
     }
 
     private String id(String key, JsonPath p, String what) throws ProjectFormatException {
+        if (key.length() > MAX_ID_LENGTH) {
+            throw fail(p.parent(), "a " + what + " id must have at most " + MAX_ID_LENGTH + " characters, got one of "
+                    + key.length() + ": '" + StrictJson.abbreviate(key) + "'");
+        }
         if (key.isBlank()) {
-            throw fail(p, "a " + what + " id must not be empty, got \"" + key + "\"");
+            throw fail(p, "a " + what + " id must not be empty, got \"" + StrictJson.abbreviate(key) + "\"");
         }
         return key;
     }
@@ -1125,8 +1214,16 @@ public final class ProjectReader {
     private ProjectFormatException fail(JsonPath p, String message) {
         String m = POINT.matcher(message).replaceAll(r -> Matcher.quoteReplacement(
                 "[" + fmtLiteral(r.group(1)) + ", " + fmtLiteral(r.group(2)) + "]"));
+        // a long value quoted from the file is shortened, however it reached the message (one line of reasonable
+        // length); only in long messages, so that the prose's apostrophes are left alone
+        if (m.length() > 400) {
+            m = LONG_QUOTE.matcher(m).replaceAll(r -> Matcher.quoteReplacement("'" + StrictJson.abbreviate(r.group(1))
+                    + "'"));
+        }
         return new ProjectFormatException(p.toString(), m + suffix);
     }
+
+    private static final Pattern LONG_QUOTE = Pattern.compile("'([^'\n]{100,})'");
 
     /**
      * Turns a constructor's rejection into a format error. Constructors name the offending field first

@@ -92,7 +92,8 @@ final class StrictJson {
                 head = "NaN and Infinity are not JSON numbers";
                 generic = false;
             }
-            throw fail("not valid JSON" + (generic ? "" : " (" + head + ")") + at);
+            // Gson may quote the input in its message (e.g. a malformed \\u escape and what follows): one line only
+            throw fail("not valid JSON" + (generic ? "" : " (" + printable(head.strip()) + ")") + at);
         }
     }
 
@@ -232,6 +233,21 @@ final class StrictJson {
 
     private ProjectFormatException fail(String message) {
         return new ProjectFormatException(at.toString(), message + sourceSuffix);
+    }
+
+    /** @return s cut to at most 200 characters, control characters escaped as \\uXXXX */
+    static String printable(String s) {
+        String cut = s.length() <= 200 ? s : s.substring(0, 197) + "...";
+        StringBuilder sb = new StringBuilder(cut.length());
+        for (int i = 0; i < cut.length(); i++) {
+            char c = cut.charAt(i);
+            if (c < 0x20 || c == 0x7f || c == '\u2028' || c == '\u2029') {
+                sb.append(String.format("\\u%04x", (int) c));
+            } else {
+                sb.append(c);
+            }
+        }
+        return sb.toString();
     }
 
     /** @return s cut to at most 40 characters with an ellipsis, control characters escaped as \\uXXXX */

@@ -44,7 +44,7 @@ import org.tensio.engine.geometry.Segment;
  * <em>and</em> the intersection's mean width (2 · area / perimeter) exceeds twice the chord error, so that
  * slivers left by densifying two different curves that touch are not reported.</li>
  * <li>Size: the section's diagonal must lie in [{@value #MIN_SIZE}, {@value #MAX_SIZE}] length units so
- * that fourth-order moments stay finite.</li>
+ * that products of second moments (length⁸) stay finite and normal doubles.</li>
  * </ul>
  * A single-use operation object in the JTS style; {@link #check(Section)} and {@link #validate(Section)}
  * are the static short cuts. Only the first problem found is reported: contours of part 0 (outer, then
@@ -64,10 +64,14 @@ public final class SectionValidator {
     public static final double OVERLAP = 1e-9;
     /** Greatest number of ring points of one section after densifying its arcs. */
     public static final int MAX_POINTS = 2_000_000;
-    /** Smallest section bounding-box diagonal accepted, length unit. */
-    public static final double MIN_SIZE = 1e-50;
-    /** Largest section bounding-box diagonal accepted, length unit. */
-    public static final double MAX_SIZE = 1e50;
+    /**
+     * Smallest section bounding-box diagonal accepted, length unit. Products of four second moments (length⁸, as
+     * in Ixx·Iyy − Ixy² of unsymmetric bending and of the shear centre) must stay inside the normal double range
+     * (about 1e±308): 1e-30 keeps them above 1e-240.
+     */
+    public static final double MIN_SIZE = 1e-30;
+    /** Largest section bounding-box diagonal accepted, length unit (length⁸ stays below 1e240). */
+    public static final double MAX_SIZE = 1e30;
     /** Value of {@link Problem#contour()} when the problem concerns a part as a whole. */
     public static final int WHOLE_PART = -1;
 

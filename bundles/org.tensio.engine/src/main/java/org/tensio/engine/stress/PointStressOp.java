@@ -63,6 +63,24 @@ public final class PointStressOp {
     }
 
     /**
+     * Refuses to report a stress that overflowed (or became NaN): forces, dimensions and moduli so far apart in
+     * magnitude that double arithmetic cannot represent the result.
+     */
+    private static void requireFinite(StressComponents total, Map<ForceComponent, StressComponents> contrib,
+            Section section, Point2 point, String stationId, String caseId) {
+        boolean finite = Double.isFinite(total.sigmaZ()) && Double.isFinite(total.tauZX()) && Double.isFinite(total.tauZY());
+        for (StressComponents c : contrib.values()) {
+            finite &= Double.isFinite(c.sigmaZ()) && Double.isFinite(c.tauZX()) && Double.isFinite(c.tauZY());
+        }
+        if (!finite) {
+            throw new IllegalArgumentException("station '" + stationId + "', case '" + caseId + "': the stress at ("
+                    + point.x() + ", " + point.y() + ") of section '" + section.name() + "' is not a finite number ("
+                    + "sigmaZ = " + total.sigmaZ() + "): the forces, dimensions and moduli are too far apart in "
+                    + "magnitude for double arithmetic; check their values and units");
+        }
+    }
+
+    /**
      * @param section    the section
      * @param props      its properties ({@link org.tensio.engine.properties.SectionPropertiesOp#compute})
      * @param forces     internal forces
@@ -167,6 +185,7 @@ public final class PointStressOp {
                 }
             }
         }
+        requireFinite(total, contrib, section, point, stationId, caseId);
         return new PointStress(stationId, caseId, point, partIndex, part.material().name(), forces, total.sigmaZ(),
                 complete ? total : null, complete ? PrincipalStresses.of(total) : null, contrib, cuts,
                 shear, torsionMethod, List.copyOf(warnings));
