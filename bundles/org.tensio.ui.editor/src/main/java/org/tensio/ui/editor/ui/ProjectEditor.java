@@ -36,7 +36,7 @@ import org.eclipse.ui.part.MultiPageEditorPart;
 import org.eclipse.ui.views.properties.IPropertySheetPage;
 import org.eclipse.ui.views.properties.PropertySheetPage;
 import org.tensio.engine.project.Project;
-import org.tensio.ui.editor.io.AtomicWriter;
+import org.tensio.engine.io.AtomicFiles;
 import org.tensio.ui.editor.model.ProjectModel;
 import org.tensio.ui.editor.pages.PageHost;
 import org.tensio.ui.editor.pages.TablePage;
@@ -260,7 +260,7 @@ public final class ProjectEditor extends MultiPageEditorPart implements CommandS
     private boolean writeTo(Path target) {
         String text = model.toText();
         try {
-            AtomicWriter.write(target, text);
+            AtomicFiles.writeString(target, text);
         } catch (IOException e) {
             ILog.of(getClass()).error("Cannot save " + target, e); //$NON-NLS-1$
             MessageDialog.openError(getSite().getShell(), Messages.ProjectEditor_saveFailedTitle,

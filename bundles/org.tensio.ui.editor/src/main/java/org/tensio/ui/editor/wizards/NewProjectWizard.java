@@ -13,7 +13,7 @@ import org.eclipse.osgi.util.NLS;
 import org.eclipse.ui.INewWizard;
 import org.eclipse.ui.IWorkbench;
 import org.eclipse.ui.PartInitException;
-import org.tensio.ui.editor.io.AtomicWriter;
+import org.tensio.engine.io.AtomicFiles;
 import org.tensio.ui.editor.ui.ProjectEditors;
 
 /**
@@ -52,7 +52,7 @@ public final class NewProjectWizard extends Wizard implements INewWizard {
                 return false;
             }
             Files.createDirectories(file.toAbsolutePath().getParent());
-            AtomicWriter.write(file, template());
+            AtomicFiles.writeString(file, template());
             ProjectEditors.open(workbench.getActiveWorkbenchWindow().getActivePage(), file);
             return true;
         } catch (IOException | PartInitException e) {
