@@ -25,7 +25,7 @@ import picocli.CommandLine.Spec;
 final class CheckCommand implements Callable<Integer> {
 
     @Mixin
-    ProjectInput input = new ProjectInput();
+    ProjectInput input; // made by Main's factory
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;

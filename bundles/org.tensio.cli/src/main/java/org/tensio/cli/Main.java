@@ -32,7 +32,23 @@ public final class Main implements Runnable {
 
     /** Runs the command line; returns the exit code. */
     public static int execute(PrintWriter out, PrintWriter err, String... args) {
-        CommandLine cl = new CommandLine(new Main());
+        return execute(out, err, null, args);
+    }
+
+    /**
+     * Runs the command line with the engine and report sections given (inside OSGi); returns the exit code.
+     *
+     * @param contributions the engine and report sections, or null to find contributions with ServiceLoader
+     * @since 0.1
+     */
+    public static int execute(PrintWriter out, PrintWriter err, Contributions contributions, String... args) {
+        CommandLine.IFactory defaults = CommandLine.defaultFactory();
+        CommandLine cl = new CommandLine(new Main(), new CommandLine.IFactory() {
+            @Override
+            public <K> K create(Class<K> cls) throws Exception {
+                return cls == ProjectInput.class ? cls.cast(new ProjectInput(contributions)) : defaults.create(cls);
+            }
+        });
         cl.setOut(out);
         cl.setErr(err);
         cl.setExecutionExceptionHandler(new ErrorHandler());

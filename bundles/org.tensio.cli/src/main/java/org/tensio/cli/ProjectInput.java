@@ -43,8 +43,19 @@ final class ProjectInput {
                     + " (also from $" + ENV + ")")
     List<Path> paths = new ArrayList<>();
 
+    private final Contributions given;
     private ClassLoader loader;
     private SectionAnalysisService engine;
+
+    /** Contributions through {@link ServiceLoader} (outside OSGi). */
+    ProjectInput() {
+        this(null);
+    }
+
+    /** @param given the engine and report sections to use (inside OSGi), or null for {@link ServiceLoader} */
+    ProjectInput(Contributions given) {
+        this.given = given;
+    }
 
     /** @return the project file as given */
     Path file() {
@@ -63,19 +74,35 @@ final class ProjectInput {
     /** @return the engine with the contributed criteria and profile types (one per command run) */
     SectionAnalysisService engine() {
         if (engine == null) {
-            engine = SectionAnalysisService.create(Extensions.discover(loader()));
+            if (given != null) {
+                refuseExtensionsOption();
+                engine = given.engine().get();
+            } else {
+                engine = SectionAnalysisService.create(Extensions.discover(loader()));
+            }
         }
         return engine;
     }
 
     /** @return the contributed report sections, in the order found */
     List<ReportSection> reportSections() {
+        if (given != null) {
+            refuseExtensionsOption();
+            return List.copyOf(given.sections().get());
+        }
         try {
             List<ReportSection> list = new ArrayList<>();
             ServiceLoader.load(ReportSection.class, loader()).forEach(list::add);
             return list;
         } catch (ServiceConfigurationError e) {
             throw new IllegalArgumentException("--extensions: " + e.getMessage(), e);
+        }
+    }
+
+    private void refuseExtensionsOption() {
+        if (!paths.isEmpty()) {
+            throw new IllegalArgumentException("--extensions: not used inside OSGi, where contributions come from the"
+                    + " extension points org.tensio.extensions.*; got " + paths);
         }
     }
 

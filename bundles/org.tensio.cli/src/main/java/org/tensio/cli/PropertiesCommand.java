@@ -23,7 +23,7 @@ import picocli.CommandLine.Spec;
 final class PropertiesCommand implements Callable<Integer> {
 
     @Mixin
-    ProjectInput input = new ProjectInput();
+    ProjectInput input; // made by Main's factory
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;

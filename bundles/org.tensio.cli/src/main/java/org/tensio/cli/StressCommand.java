@@ -19,7 +19,7 @@ import picocli.CommandLine.Spec;
 final class StressCommand implements Callable<Integer> {
 
     @Mixin
-    ProjectInput input = new ProjectInput();
+    ProjectInput input; // made by Main's factory
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
