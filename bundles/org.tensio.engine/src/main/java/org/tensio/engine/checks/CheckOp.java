@@ -73,6 +73,23 @@ public final class CheckOp {
         double at(double sigmaZ, double tauZX, double tauZY);
     }
 
+    /** One criterion of a material, resolved once per station: its name, demand and capacity. */
+    private record Rule(String name, Demand demand, double capacity) {
+    }
+
+    /** @return the built-in, then the contributed criteria of {@code lim} */
+    private List<Rule> rules(MaterialLimits lim) {
+        List<Rule> rules = new ArrayList<>();
+        for (Criterion c : lim.criteria()) {
+            rules.add(new Rule(c.name(), (a, b, d) -> MaterialLimits.demand(c, a, b, d), lim.capacity(c)));
+        }
+        for (String id : lim.contributedCriteria()) {
+            CheckCriterion c = contributed(id, lim.material());
+            rules.add(new Rule(id, c::demand, c.capacity(lim)));
+        }
+        return rules;
+    }
+
     private CheckCriterion contributed(String id, String material) {
         return engine.extensions().criterion(id).orElseThrow(() -> new IllegalArgumentException("materials." + material
                 + ".criteria: criterion '" + id + "' is not contributed to this engine (have "
@@ -128,6 +145,10 @@ public final class CheckOp {
                 mat[i] = keys.indexOf(f.material(i));
             }
             double[] s = new double[n], tx = new double[n], ty = new double[n];
+            List<List<Rule>> byMaterial = new ArrayList<>();
+            for (String m : keys) {
+                byMaterial.add(rules(checked.get(m)));
+            }
             Set<String> singularAt = new LinkedHashSet<>();
             int singularCount = 0;
             for (String caseId : cases) {
@@ -139,23 +160,10 @@ public final class CheckOp {
                 }
                 for (int k = 0; k < keys.size(); k++) {
                     MaterialLimits lim = checked.get(keys.get(k));
-                    List<String> names = new ArrayList<>();
-                    List<Demand> demands = new ArrayList<>();
-                    List<Double> capacities = new ArrayList<>();
-                    for (Criterion c : lim.criteria()) {
-                        names.add(c.name());
-                        demands.add((a, b, d) -> MaterialLimits.demand(c, a, b, d));
-                        capacities.add(lim.capacity(c));
-                    }
-                    for (String id : lim.contributedCriteria()) {
-                        CheckCriterion c = contributed(id, keys.get(k));
-                        names.add(id);
-                        demands.add(c::demand);
-                        capacities.add(c.capacity(lim));
-                    }
-                    for (int j = 0; j < names.size(); j++) {
-                        Demand demand = demands.get(j);
-                        double capacity = capacities.get(j);
+                    List<Rule> rules = byMaterial.get(k);
+                    for (Rule rule : rules) {
+                        Demand demand = rule.demand();
+                        double capacity = rule.capacity();
                         int best = -1;
                         double bestD = Double.NEGATIVE_INFINITY;
                         for (int i = 0; i < n; i++) {
@@ -165,12 +173,12 @@ public final class CheckOp {
                             double d = demand.at(s[i], tx[i], ty[i]);
                             if (!Double.isFinite(d / capacity)) {
                                 throw new IllegalArgumentException("station '" + st.id() + "', case '" + caseId
-                                        + "': the " + names.get(j) + " utilisation of material '" + keys.get(k)
+                                        + "': the " + rule.name() + " utilisation of material '" + keys.get(k)
                                         + "' at (" + f.x(i) + ", " + f.y(i) + ") is not a finite number (demand " + d
                                         + ", capacity " + capacity + "): forces, dimensions, moduli and strengths are "
                                         + "too far apart in magnitude for double arithmetic; check their values and units");
                             }
-                            if (d > bestD || Double.isNaN(d) && !Double.isNaN(bestD)) {
+                            if (d > bestD) {
                                 bestD = d;
                                 best = i;
                             }
@@ -179,11 +187,11 @@ public final class CheckOp {
                             continue; // material listed but no mesh node carries it: cannot happen for a meshed part
                         }
                         if (!Double.isFinite(bestD) || bestD < 0) {
-                            throw new IllegalStateException("criterion " + names.get(j) + " gave the demand " + bestD
+                            throw new IllegalStateException("criterion " + rule.name() + " gave the demand " + bestD
                                     + " at (" + f.x(best) + ", " + f.y(best) + "), station '" + st.id() + "', case '"
                                     + caseId + "'; a demand must be finite and >= 0");
                         }
-                        results.add(new CheckResult(st.id(), caseId, names.get(j), keys.get(k), bestD / capacity,
+                        results.add(new CheckResult(st.id(), caseId, rule.name(), keys.get(k), bestD / capacity,
                                 bestD, capacity, f.point(best), s[best], tx[best], ty[best], f.singular(best)));
                         if (f.singular(best) && shear) {
                             singularCount++;

@@ -57,6 +57,7 @@ public final class SectionAnalysisServiceImpl implements SectionAnalysisService 
         }
     };
 
+    private final Object lock = new Object();
     private final List<CheckCriterion> boundCriteria = new ArrayList<>();
     private final List<ProfileType> boundProfileTypes = new ArrayList<>();
     private volatile Extensions extensions;
@@ -75,14 +76,14 @@ public final class SectionAnalysisServiceImpl implements SectionAnalysisService 
     @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
             policyOption = ReferencePolicyOption.GREEDY)
     void addCriterion(CheckCriterion criterion) {
-        synchronized (boundCriteria) {
+        synchronized (lock) {
             boundCriteria.add(criterion);
             rebuild();
         }
     }
 
     void removeCriterion(CheckCriterion criterion) {
-        synchronized (boundCriteria) {
+        synchronized (lock) {
             boundCriteria.remove(criterion);
             rebuild();
         }
@@ -92,14 +93,14 @@ public final class SectionAnalysisServiceImpl implements SectionAnalysisService 
     @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
             policyOption = ReferencePolicyOption.GREEDY)
     void addProfileType(ProfileType type) {
-        synchronized (boundCriteria) {
+        synchronized (lock) {
             boundProfileTypes.add(type);
             rebuild();
         }
     }
 
     void removeProfileType(ProfileType type) {
-        synchronized (boundCriteria) {
+        synchronized (lock) {
             boundProfileTypes.remove(type);
             rebuild();
         }
@@ -142,7 +143,12 @@ public final class SectionAnalysisServiceImpl implements SectionAnalysisService 
 
     @Override
     public Project parseProject(String json, String sourceName) throws ProjectFormatException {
-        return ProjectReader.parse(json, sourceName, null, extensions);
+        return parseProject(json, sourceName, null);
+    }
+
+    @Override
+    public Project parseProject(String json, String sourceName, Path baseDir) throws ProjectFormatException {
+        return ProjectReader.parse(json, sourceName, baseDir, extensions);
     }
 
     @Override

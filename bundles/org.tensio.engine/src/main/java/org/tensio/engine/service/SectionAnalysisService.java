@@ -39,6 +39,16 @@ public interface SectionAnalysisService {
     Project parseProject(String json, String sourceName) throws ProjectFormatException;
 
     /**
+     * Parses a project from its JSON text, reading its load tables ({@code loadTables}) from {@code baseDir} (the
+     * folder their file names are relative to, normally the project file's folder), e.g. for an editor that
+     * validates unsaved text of a file.
+     *
+     * @param baseDir the folder of the load tables; null: a project with load tables is rejected
+     * @since 0.1
+     */
+    Project parseProject(String json, String sourceName, Path baseDir) throws ProjectFormatException;
+
+    /**
      * @return the exact properties of {@code section}; J, shear centre and Cw from the closed forms for circles
      *         and tubes, from the finite-element solution on the default mesh for every other section ({@code null}
      *         with {@code torsionSource} {@code "finiteElementFailed"} if that solution failed)

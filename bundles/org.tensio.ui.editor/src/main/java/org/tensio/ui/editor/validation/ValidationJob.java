@@ -44,7 +44,7 @@ public final class ValidationJob extends Job {
 
     /**
      * @param file the project file when the text has load tables (their CSV paths are relative to its folder),
-     *             else null
+     *             else null; the text is parsed with that folder, nothing is written
      */
     public ValidationJob(String text, java.nio.file.Path file, String sourceName, AnalysisServiceTracker services,
             ProblemMarkers markers, BiConsumer<Project, List<Problem>> done) {
@@ -63,27 +63,6 @@ public final class ValidationJob extends Job {
         return family == FAMILY;
     }
 
-    /**
-     * The service parses text without a folder, where load tables cannot be found; a project with load tables is
-     * checked from a transient copy beside the file (deleted at once), messages naming the file itself.
-     */
-    private Project readBesideFile(SectionAnalysisService service) throws ProjectFormatException, java.io.IOException {
-        java.nio.file.Path copy = java.nio.file.Files.createTempFile(file.toAbsolutePath().getParent(),
-                "." + file.getFileName(), ".check.json"); //$NON-NLS-1$ //$NON-NLS-2$
-        try {
-            java.nio.file.Files.writeString(copy, text, java.nio.charset.StandardCharsets.UTF_8);
-            return service.readProject(copy);
-        } catch (ProjectFormatException e) {
-            String prefix = e.path() + ": "; //$NON-NLS-1$
-            String message = e.getMessage().startsWith(prefix) ? e.getMessage().substring(prefix.length())
-                    : e.getMessage();
-            throw new ProjectFormatException(e.path(),
-                    message.replace(copy.getFileName().toString(), file.getFileName().toString()));
-        } finally {
-            java.nio.file.Files.deleteIfExists(copy);
-        }
-    }
-
     @Override
     protected IStatus run(IProgressMonitor monitor) {
         Optional<SectionAnalysisService> service;
@@ -99,12 +78,11 @@ public final class ValidationJob extends Job {
         Project project = null;
         List<Problem> problems;
         try {
-            project = file == null ? service.get().parseProject(text, sourceName) : readBesideFile(service.get());
+            project = service.get().parseProject(text, sourceName,
+                    file == null ? null : file.toAbsolutePath().getParent());
             problems = List.of();
         } catch (ProjectFormatException e) {
             problems = List.of(new Problem(e.path(), e.getMessage()));
-        } catch (java.io.IOException e) {
-            problems = List.of(new Problem("$", e.getMessage())); //$NON-NLS-1$
         } catch (IllegalArgumentException e) {
             problems = List.of(new Problem("$", e.getMessage())); //$NON-NLS-1$
         }
