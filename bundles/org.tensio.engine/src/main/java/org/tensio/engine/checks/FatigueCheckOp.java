@@ -2,23 +2,10 @@ package org.tensio.engine.checks;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 
-import org.tensio.engine.fatigue.CycleLoads;
-import org.tensio.engine.fatigue.CycleStress;
-import org.tensio.engine.fatigue.EnduranceLimit;
-import org.tensio.engine.fatigue.EquivalentDiameter;
-import org.tensio.engine.fatigue.Factor;
-import org.tensio.engine.fatigue.FatigueConditions;
-import org.tensio.engine.fatigue.FatigueCriterion;
 import org.tensio.engine.fatigue.FatigueData;
-import org.tensio.engine.fatigue.FatigueDetail;
 import org.tensio.engine.fatigue.FatigueMaterial;
 import org.tensio.engine.fatigue.FatigueStation;
-import org.tensio.engine.fatigue.LoadHistory;
-import org.tensio.engine.fatigue.MarinFactors;
-import org.tensio.engine.fatigue.MinimumDiameter;
-import org.tensio.engine.fatigue.Notch;
 import org.tensio.engine.fatigue.NotchFactors;
 import org.tensio.engine.geometry.Point2;
 import org.tensio.engine.loads.InternalForces;
@@ -102,10 +89,7 @@ public final class FatigueCheckOp {
                     mats.add(p.material().name());
                 }
             });
-            for (Map.Entry<String, LoadHistory> h : fs.histories().entrySet()) {
-                CycleLoads loads = h.getValue().cycle(c -> project.forces(st.id(), c));
-                Factor kb = EquivalentDiameter.sizeFactor(section, props, loads, fs.equivalentDiameter(),
-                        fd.mmPerLengthUnit());
+            for (String historyId : fs.histories().keySet()) {
                 for (String m : mats) {
                     FatigueMaterial fm = fd.materials().get(m);
                     if (fm == null) {
@@ -115,65 +99,41 @@ public final class FatigueCheckOp {
                         }
                         continue;
                     }
-                    evaluate(fs, st, section, props, f, surface, h.getKey(), h.getValue(), loads, kb, fm, out);
+                    evaluate(new FatigueRules(project, fs, section, props, historyId, fm), f, surface, out);
                 }
             }
         }
         return out;
     }
 
-    private void evaluate(FatigueStation fs, Station st, Section section, SectionProperties props, UnitStressField f,
-            boolean[] surface, String historyId, LoadHistory history, CycleLoads loads, Factor kb, FatigueMaterial fm,
-            List<CheckResult> out) {
-        FatigueData fd = project.fatigue();
-        double mpa = fd.mpaPerStressUnit();
-        FatigueConditions cond = fs.conditions().over(fm.conditions());
-        EnduranceLimit endurance = EnduranceLimit.of(fm, cond, kb, mpa);
-        double se = endurance.value(), sut = fm.sut(), sy = fm.sy() == null ? Double.NaN : fm.sy();
-        List<NotchFactors> notches = new ArrayList<>();
-        for (Notch n : fs.notches()) {
-            notches.add(NotchFactors.of(n, sut * mpa, fd.mmPerLengthUnit(), fm.sensitivity()));
-        }
-        List<FatigueCriterion> crit = fs.criteria();
-        boolean yieldPeak = crit.contains(FatigueCriterion.firstCycleYield);
-        boolean yieldSum = crit.contains(FatigueCriterion.langer);
-        Phase mean = new Phase(loads.mean()), cos = new Phase(loads.cosine()), sin = new Phase(loads.sine());
-        int k = crit.size();
+    /** The governing sample of each criterion of {@code rules} among the samples of its material. */
+    private static void evaluate(FatigueRules rules, UnitStressField f, boolean[] surface, List<CheckResult> out) {
+        int k = rules.criteria().size();
         int[] best = new int[k];
-        double[] bestU = new double[k], bestD = new double[k];
-        double[][] bestS = new double[k][];
+        double[] bestU = new double[k], bestA = new double[k], bestM = new double[k], bestMax = new double[k],
+                bestD = new double[k];
         java.util.Arrays.fill(best, -1);
         java.util.Arrays.fill(bestU, Double.NEGATIVE_INFINITY);
-        Point2 centroid = props.centroid();
-        double[] m = new double[3], c = new double[3], s = new double[3], cy = new double[3], sy3 = new double[3];
+        double[] a = new double[k], sm = new double[k], smax = new double[k], d = new double[k], cap = new double[k];
+        for (int j = 0; j < k; j++) {
+            cap[j] = rules.capacity(j);
+        }
+        Sample at = new Sample(f);
         for (int i = 0; i < f.size(); i++) {
-            if (!f.material(i).equals(fm.material())) {
+            if (!f.material(i).equals(rules.material())) {
                 continue;
             }
-            NotchFactors nf = at(notches, f.x(i), f.y(i), surface[i], centroid);
-            mean.fill(f, i, nf, 1, m);
-            cos.fill(f, i, nf, AXIAL_LOAD_FACTOR, c);
-            sin.fill(f, i, nf, AXIAL_LOAD_FACTOR, s);
-            double sa = CycleStress.alternating(c, s), sm = CycleStress.mean(m), smax = Double.NaN, saY = sa;
-            if (yieldPeak || yieldSum) {
-                // the yield checks take the actual stresses: no axial load factor
-                cos.fill(f, i, nf, 1, cy);
-                sin.fill(f, i, nf, 1, sy3);
-                saY = CycleStress.alternating(cy, sy3);
-                if (yieldPeak) {
-                    smax = CycleStress.peak(m, cy, sy3)[0];
-                }
-            }
+            at.i = i;
+            rules.evaluate(at, rules.notchAt(f.x(i), f.y(i), surface[i]), a, sm, smax, d);
             for (int j = 0; j < k; j++) {
-                FatigueCriterion cr = crit.get(j);
-                double a = cr.isFatigueLine() ? sa : saY;
-                double d = cr.demand(a, sm, smax, se, sut, sy);
-                double u = d / cr.capacity(se, sy);
+                double u = d[j] / cap[j];
                 if (u > bestU[j]) {
                     bestU[j] = u;
-                    bestD[j] = d;
                     best[j] = i;
-                    bestS[j] = new double[] {a, sm, smax};
+                    bestA[j] = a[j];
+                    bestM[j] = sm[j];
+                    bestMax[j] = smax[j];
+                    bestD[j] = d[j];
                 }
             }
         }
@@ -182,47 +142,34 @@ public final class FatigueCheckOp {
             if (i < 0) {
                 continue;
             }
-            FatigueCriterion cr = crit.get(j);
-            NotchFactors nf = at(notches, f.x(i), f.y(i), surface[i], centroid);
-            mean.fill(f, i, nf, 1, m);
-            cos.fill(f, i, nf, 1, cy);
-            sin.fill(f, i, nf, 1, sy3);
-            double[] pk = CycleStress.peak(m, cy, sy3);
-            double[] state = CycleStress.state(m, cy, sy3, pk[1]);
-            double smax = Double.isNaN(bestS[j][2]) ? pk[0] : bestS[j][2];
-            double capacity = cr.capacity(se, sy);
-            double[] minimum = {Double.NaN};
-            String minimumText = minimum(fs, section, loads, fm, cond, cr, minimum);
-            FatigueDetail detail = new FatigueDetail(historyId, history.describe(), cr, crit, bestS[j][0], bestS[j][1],
-                    smax, capacity / bestD[j], endurance, sut, sy, nf, notchText(nf, notches, f.x(i), f.y(i),
-                            surface[i], centroid), minimum[0], minimumText);
-            out.add(new CheckResult(st.id(), historyId, cr.name(), fm.material(), bestD[j] / capacity, bestD[j], capacity,
-                    f.point(i), state[0], state[1], state[2], f.singular(i), detail));
+            at.i = i;
+            out.add(rules.result(j, at, f.point(i), surface[i], f.singular(i), bestA[j], bestM[j], bestMax[j],
+                    bestD[j]));
         }
     }
 
-    /** The forces of one phase split into N only and the rest. */
-    private static final class Phase {
-        final InternalForces axial;
-        final InternalForces rest;
-        final boolean zero;
+    /** The unit stresses of one sample of a {@link UnitStressField}. */
+    private static final class Sample implements FatigueRules.UnitStresses {
+        final UnitStressField f;
+        int i;
 
-        Phase(InternalForces p) {
-            axial = new InternalForces(p.n(), 0, 0, 0, 0, 0);
-            rest = new InternalForces(0, p.vx(), p.vy(), p.mx(), p.my(), p.t());
-            zero = p.equals(InternalForces.ZERO) || (p.n() == 0 && p.vx() == 0 && p.vy() == 0 && p.mx() == 0
-                    && p.my() == 0 && p.t() == 0);
+        Sample(UnitStressField f) {
+            this.f = f;
         }
 
-        /** {σ, τzx, τzy} at sample i, Kf-amplified, the axial part divided by {@code axialFactor}. */
-        void fill(UnitStressField f, int i, NotchFactors nf, double axialFactor, double[] out) {
-            if (zero) {
-                out[0] = out[1] = out[2] = 0;
-                return;
-            }
-            out[0] = nf.kf() * f.sigmaZ(i, rest) + nf.kfAxial() * f.sigmaZ(i, axial) / axialFactor;
-            out[1] = nf.kfs() * f.tauZX(i, rest);
-            out[2] = nf.kfs() * f.tauZY(i, rest);
+        @Override
+        public double sigmaZ(InternalForces forces) {
+            return f.sigmaZ(i, forces);
+        }
+
+        @Override
+        public double tauZX(InternalForces forces) {
+            return f.tauZX(i, forces);
+        }
+
+        @Override
+        public double tauZY(InternalForces forces) {
+            return f.tauZY(i, forces);
         }
     }
 
@@ -243,79 +190,6 @@ public final class FatigueCheckOp {
             }
         }
         return acc == null ? NotchFactors.NONE : acc;
-    }
-
-    private static String notchText(NotchFactors nf, List<NotchFactors> notches, double x, double y, boolean onSurface,
-            Point2 centroid) {
-        StringBuilder sb = new StringBuilder();
-        for (NotchFactors n : notches) {
-            if (n.notch().location().covers(x, y, onSurface, centroid)) {
-                sb.append(sb.length() == 0 ? "" : " and ").append(n.notch().type().description()).append(" (")
-                        .append(n.notch().location().describe()).append(')');
-            }
-        }
-        if (sb.length() == 0) {
-            return "no notch acts at this point (Kf = Kfs = 1)";
-        }
-        return sb + (nf.notch() == null ? ": the largest factor of each kind" : "");
-    }
-
-    /** @return the text of the minimum-diameter result; stores the diameter in {@code d[0]} when found */
-    private String minimum(FatigueStation fs, Section section, CycleLoads loads, FatigueMaterial fm,
-            FatigueConditions cond, FatigueCriterion cr, double[] d) {
-        if (fs.requiredFactor() == null || !cr.isFatigueLine()) {
-            return "";
-        }
-        double[] round = EquivalentDiameter.roundRadii(section);
-        if (round == null || round[1] > 0) {
-            return "minimum diameter: only for a solid round shaft";
-        }
-        if (cr.needsYield() && fm.sy() == null) {
-            return "minimum diameter: needs fy";
-        }
-        FatigueData fd = project.fatigue();
-        double mpa = fd.mpaPerStressUnit(), mm = fd.mmPerLengthUnit(), d0 = 2 * round[0];
-        double ma = loads.bendingAmplitude(), mmean = loads.meanBending();
-        double ta = loads.torqueAmplitude(), tm = Math.abs(loads.mean().t());
-        if (ma == 0 && mmean == 0 && ta == 0 && tm == 0) {
-            return "minimum diameter: no bending moment or torque";
-        }
-        java.util.function.DoubleUnaryOperator se = dd -> EnduranceLimit.of(fm, cond, fs.equivalentDiameter() != null
-                ? MarinFactors.size(fs.equivalentDiameter() * mm, "given") : MarinFactors.size(dd * mm, "iterated"),
-                mpa).value();
-        java.util.function.DoubleUnaryOperator kf = dd -> worst(fs, fm, dd / d0, false);
-        java.util.function.DoubleUnaryOperator kfs = dd -> worst(fs, fm, dd / d0, true);
-        double sy = fm.sy() == null ? Double.NaN : fm.sy();
-        try {
-            MinimumDiameter.Result r = MinimumDiameter.solve(cr, fs.requiredFactor(), ma, mmean, ta, tm, fm.sut(), sy, se,
-                    kf, kfs, d0);
-            d[0] = r.diameter();
-            return "minimum diameter for n = " + fmt(fs.requiredFactor()) + " by DE-" + cr.label() + ": " + fmt(r.diameter()) + " "
-                    + project.units().length() + " (Se = " + fmt(r.se()) + " " + project.units().stressUnit() + ", Kf = " + fmt(r.kf()) + ", Kfs = " + fmt(r.kfs()) + " at that diameter, notch radii"
-                    + " scaled with it; " + r.iterations() + " iterations; Shigley's Mechanical Engineering Design,"
-                    + " 9th/10th ed., sec. 7-4, from memory)" + (loads.axialAmplitude() != 0 || loads.mean().n() != 0
-                            ? "; the axial force is not part of this closed form" : "");
-        } catch (RuntimeException e) {
-            return "minimum diameter: " + e.getMessage();
-        }
-    }
-
-    /** The largest Kf (or Kfs) of the station's notches with their radii scaled by {@code scale}. */
-    private double worst(FatigueStation fs, FatigueMaterial fm, double scale, boolean torsion) {
-        double w = 1;
-        FatigueData fd = project.fatigue();
-        for (Notch n : fs.notches()) {
-            Notch scaled = new Notch(n.type(), n.kt(), n.kts(), n.ktAxial(), n.radius() == null ? null : n.radius() * scale,
-                    n.q(), n.qs(), n.kf(), n.kfs(), n.kfAxial(), n.location());
-            NotchFactors nf = NotchFactors.of(scaled, fm.sut() * fd.mpaPerStressUnit(), fd.mmPerLengthUnit(),
-                    fm.sensitivity());
-            w = Math.max(w, torsion ? nf.kfs() : nf.kf());
-        }
-        return w;
-    }
-
-    private static String fmt(double v) {
-        return String.format(java.util.Locale.ROOT, "%.4g", v);
     }
 
     /** @return per sample: true when its mesh node lies on the boundary (an edge used by one element only) */
