@@ -37,7 +37,7 @@ import org.tensio.engine.stress.StressComponents;
  * pixel in section units, so that the outer fibre can be hit.
  * <p>
  * Built once per section (it keeps the boundary and the rules it has resolved); {@link #evaluate} is cheap
- * (six point evaluations and the cycle algebra). Not thread-safe.
+ * (six point evaluations and the cycle algebra). Thread-safe: evaluations are serialised.
  *
  * @since 0.1
  */
@@ -127,7 +127,7 @@ public final class FatiguePointOp {
      * @throws IllegalArgumentException when the station is unknown, has no fatigue check or another section, the
      *                                  tolerance is negative or not finite, or the point lies outside the section
      */
-    public Result evaluate(String stationId, Point2 at, double surfaceTolerance) {
+    public synchronized Result evaluate(String stationId, Point2 at, double surfaceTolerance) {
         if (!(surfaceTolerance >= 0) || !Double.isFinite(surfaceTolerance)) {
             throw new IllegalArgumentException("surfaceTolerance: must be finite and ≥ 0, got " + surfaceTolerance);
         }

@@ -52,6 +52,12 @@ class HouseKitInOsgiTest {
 
     /** Waits until the engine has bound the example's contributions (DS binds them dynamically). */
     private SectionAnalysisService engineWithHouseKit() throws InterruptedException {
+        return engineWithHouseKit(engines);
+    }
+
+    /** Waits until the tracked engine has bound the example's contributions (DS binds them dynamically). */
+    static SectionAnalysisService engineWithHouseKit(
+            ServiceTracker<SectionAnalysisService, SectionAnalysisService> engines) throws InterruptedException {
         SectionAnalysisService engine = engines.waitForService(TIMEOUT_MS);
         assertNotNull(engine, "SectionAnalysisService not registered");
         long end = System.currentTimeMillis() + TIMEOUT_MS;
@@ -65,7 +71,7 @@ class HouseKitInOsgiTest {
         return engine;
     }
 
-    private static String resource(String name) throws IOException {
+    static String resource(String name) throws IOException {
         try (InputStream in = HouseKitInOsgiTest.class.getResourceAsStream("/" + name)) {
             assertNotNull(in, name);
             return new String(in.readAllBytes(), StandardCharsets.UTF_8);

@@ -27,7 +27,11 @@ import org.tensio.ui.selection.SectionPoint;
  * <p>
  * A point without a station takes the first station (file order) of its section; a point without a case takes,
  * among the station's cases and combinations, the one with the largest utilisation at the point (the largest von
- * Mises stress when the material has no limits).
+ * Mises stress when the material has no limits). Contributed criteria of the material count like the built-in
+ * ones. When the station has a fatigue check, the report also carries the fatigue results at the point for every
+ * load history and fatigue criterion ({@link org.tensio.engine.checks.FatiguePointOp}, the rules of the check;
+ * notches on the surface act within {@link #SURFACE_TOLERANCE} of the boundary); a station without load cases
+ * whose fatigue histories give the forces shows the static state under no load ({@link #NO_CASE}).
  */
 public final class PointEvaluator {
 
@@ -50,17 +54,50 @@ public final class PointEvaluator {
                     + station.sectionId() + "', not '" + prepared.section().name() + "'");
         }
         Point2 at = new Point2(point.x(), point.y());
-        if (point.caseId() != null) {
-            return report(prepared, stationId, point.caseId(), at, false);
-        }
         PointReport best = null;
-        for (String caseId : LoadCases.at(project, station, null)) {
-            PointReport r = report(prepared, stationId, caseId, at, true);
-            if (best == null || score(r) > score(best)) {
-                best = r;
+        if (point.caseId() != null) {
+            best = report(prepared, stationId, point.caseId(), at, false);
+        } else {
+            for (String caseId : LoadCases.at(project, station, null)) {
+                PointReport r = report(prepared, stationId, caseId, at, true);
+                if (best == null || score(r) > score(best)) {
+                    best = r;
+                }
             }
         }
-        return best;
+        if (best == null && prepared.fatigue() != null && prepared.fatigue().station(stationId) != null) {
+            // a fatigue-only station (its histories give the forces): the static state under no load
+            best = report(prepared, stationId, NO_CASE, at, false);
+        }
+        return best == null ? null : fatigue(prepared, stationId, at, best);
+    }
+
+    /** The case id shown for a station without load cases whose fatigue histories give its forces. */
+    public static final String NO_CASE = "\u2014"; //$NON-NLS-1$
+
+    /**
+     * Points within this fraction of the section's bounding-box diagonal from its boundary count as on the
+     * surface for the fatigue notches that act there (about four pixels at the editor's fitted zoom), so that the
+     * outer fibre can be reached with the pointer; the tree's governing points lie on it exactly. Common
+     * practice, no source.
+     */
+    public static final double SURFACE_TOLERANCE = 0.005;
+
+    private static PointReport fatigue(PreparedSection p, String stationId, Point2 at, PointReport r) {
+        if (p.fatigue() == null) {
+            boolean wanted = p.project().fatigue().stations().values().stream()
+                    .anyMatch(fs -> fs.station().equals(stationId));
+            return wanted ? r.withFatigue(null, Messages.PointEvaluator_fatigueNoSolution) : r;
+        }
+        if (p.fatigue().station(stationId) == null) {
+            return r;
+        }
+        try {
+            return r.withFatigue(p.fatigue().evaluate(stationId, at,
+                    SURFACE_TOLERANCE * p.section().bounds().diagonal()), null);
+        } catch (IllegalArgumentException e) {
+            return r.withFatigue(null, e.getMessage());
+        }
     }
 
     private static double score(PointReport r) {
@@ -71,25 +108,30 @@ public final class PointEvaluator {
     }
 
     private static PointReport report(PreparedSection p, String stationId, String caseId, Point2 at, boolean chosen) {
-        InternalForces f = p.project().forces(stationId, caseId);
+        InternalForces f = NO_CASE.equals(caseId) ? InternalForces.ZERO : p.project().forces(stationId, caseId);
         // the fields only where the service's stressAt uses them, so that methods and numbers are the same
         boolean fields = f.vx() != 0 || f.vy() != 0 || !p.props().torsionClosedForm() && f.t() != 0;
         PointStress s = PointStressOp.evaluate(p.section(), p.props(), fields ? p.solution() : null,
                 ShearMethod.finiteElement, f, at, stationId, caseId);
-        Map<Criterion, Double> u = new LinkedHashMap<>();
-        Criterion governing = null;
+        Map<String, Double> u = new LinkedHashMap<>();
+        String governing = null;
         MaterialLimits limits = p.project().limits().get(s.material());
         if (limits != null && s.total() != null) {
+            double sz = s.total().sigmaZ(), tx = s.total().tauZX(), ty = s.total().tauZY();
             for (Criterion c : limits.criteria()) {
-                double v = MaterialLimits.demand(c, s.total().sigmaZ(), s.total().tauZX(), s.total().tauZY())
-                        / limits.capacity(c);
-                u.put(c, v);
-                if (governing == null || v > u.get(governing)) {
-                    governing = c;
+                u.put(c.name(), MaterialLimits.demand(c, sz, tx, ty) / limits.capacity(c));
+            }
+            for (String id : limits.contributedCriteria()) {
+                // the project was read with these contributions, so each is there; a missing one is skipped
+                p.extensions().criterion(id).ifPresent(c -> u.put(id, c.demand(sz, tx, ty) / c.capacity(limits)));
+            }
+            for (Map.Entry<String, Double> e : u.entrySet()) {
+                if (governing == null || e.getValue() > u.get(governing)) {
+                    governing = e.getKey();
                 }
             }
         }
-        return new PointReport(p.section().name(), s, u, governing, chosen, p.project().units());
+        return new PointReport(p.section().name(), s, u, governing, chosen, p.project().units(), null, null);
     }
 
     private static String firstStation(Project project, String sectionId) {

@@ -69,7 +69,8 @@ public final class PreparedSections {
         SectionProperties props = service.properties(section);
         FiniteElementSolution fe = "finiteElementFailed".equals(props.torsionSource()) ? null //$NON-NLS-1$
                 : service.solution(section);
-        PreparedSection p = new PreparedSection(file, project, section, props, fe);
+        PreparedSection p = new PreparedSection(file, project, section, props, fe, service.extensions(),
+                PreparedSection.fatigueOf(project, section, props, fe));
         put(p);
         return p;
     }

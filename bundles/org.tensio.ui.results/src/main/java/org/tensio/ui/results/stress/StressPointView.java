@@ -40,8 +40,10 @@ import org.tensio.ui.services.AnalysisServiceTracker;
 
 /**
  * The stress-point view ({@value #ID}): the full stress state at one point of a station's section — coordinates,
- * σz, τzx, τzy, principal stresses and directions, τmax, von Mises, Tresca, utilisation and governing criterion,
- * the contribution of each internal force, the stress element and Mohr's circles.
+ * σz, τzx, τzy, principal stresses and directions, τmax, von Mises, Tresca, utilisation and governing criterion
+ * (built-in and contributed criteria), the contribution of each internal force, the stress element and Mohr's
+ * circles, and — at a station with a fatigue check — the fatigue results at the point for each load history and
+ * fatigue criterion ({@link FatigueTable}).
  * <p>
  * It follows the pointer of the active part that offers a {@link SectionPointerSource} (the section editor) and
  * {@link SectionPoint} selections of any part (the results tree, the editor); pinned
@@ -87,6 +89,7 @@ public final class StressPointView extends ViewPart {
     private StressTables tables;
     private Canvas drawing;
     private Palette palette;
+    private FatigueTable fatigue;
     private Label warnings;
     private IWorkbenchPart sourcePart;
     private SectionPointerSource source;
@@ -122,6 +125,11 @@ public final class StressPointView extends ViewPart {
             MohrCirclePainter.paint(e.gc, new Rectangle(a.x + half, a.y, a.width - half, a.height), s.total(),
                     s.principal(), unit, palette);
         });
+        fatigue = new FatigueTable(parent);
+        GridDataFactory.fillDefaults().grab(true, false).span(2, 1).hint(300, SWT.DEFAULT).applyTo(fatigue.summary());
+        GridDataFactory.fillDefaults().grab(true, false).span(2, 1)
+                .hint(700, fatigue.table().getHeaderHeight() + 6 * rowHeight + 6).applyTo(fatigue.table());
+        showFatigue(false);
         warnings = new Label(parent, SWT.WRAP);
         GridDataFactory.fillDefaults().grab(true, false).span(2, 1).hint(300, SWT.DEFAULT).applyTo(warnings);
         Label caution = new Label(parent, SWT.WRAP);
@@ -188,6 +196,31 @@ public final class StressPointView extends ViewPart {
         return tables.values();
     }
 
+    /**
+     * @return the fatigue table (history, criterion, σa′, σm′, σmax′, Se, n, utilisation), empty and hidden when
+     *         the station has no fatigue check
+     */
+    public Table fatigueTable() {
+        return fatigue.table();
+    }
+
+    /** @return the fatigue summary line (surface, Kf, Kfs, notches, Se and its factors), empty when none */
+    public String fatigueSummary() {
+        return fatigue.summary().getText();
+    }
+
+    /** Lays the fatigue widgets out only when they show something. */
+    private void showFatigue(boolean visible) {
+        for (org.eclipse.swt.widgets.Control c : new org.eclipse.swt.widgets.Control[] { fatigue.summary(),
+                fatigue.table() }) {
+            if (c.getVisible() != visible) {
+                ((org.eclipse.swt.layout.GridData) c.getLayoutData()).exclude = !visible;
+                c.setVisible(visible);
+                c.getParent().layout(true);
+            }
+        }
+    }
+
     /** @return the contributions table (force, σz, τzx, τzy) */
     public Table contributionsTable() {
         return tables.contributions();
@@ -199,16 +232,19 @@ public final class StressPointView extends ViewPart {
             if (r == null) {
                 report = null;
                 tables.clear();
+                showFatigue(fatigue.show(null));
                 header.setText(NLS.bind(Messages.StressPointView_noStation, point.sectionId()));
             } else {
                 report = r;
                 tables.show(r);
+                showFatigue(fatigue.show(r));
                 updateHeader();
                 warnings.setText(String.join("; ", r.warnings())); //$NON-NLS-1$
             }
         } catch (IllegalArgumentException e) {
             report = null;
             tables.clear();
+            showFatigue(fatigue.show(null));
             header.setText(NLS.bind(Messages.StressPointView_outside, e.getMessage()));
             warnings.setText(""); //$NON-NLS-1$
         }
@@ -249,6 +285,7 @@ public final class StressPointView extends ViewPart {
                 if (message != null) {
                     report = null;
                     tables.clear();
+                    showFatigue(fatigue.show(null));
                     header.setText(message);
                     drawing.redraw();
                 } else {

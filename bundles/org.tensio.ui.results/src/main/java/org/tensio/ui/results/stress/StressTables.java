@@ -10,8 +10,8 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
+import org.tensio.engine.checks.CheckResult;
 import org.tensio.engine.loads.ForceComponent;
-import org.tensio.engine.section.Criterion;
 import org.tensio.engine.stress.PointStress;
 import org.tensio.engine.stress.PrincipalStresses;
 import org.tensio.engine.stress.StressComponents;
@@ -89,9 +89,15 @@ final class StressTables {
         rows.add(row(Messages.StressTables_tresca, p == null ? Double.NaN : p.tresca(), st));
         rows.add(row(Messages.StressTables_utilisation, r.utilisation(), "")); //$NON-NLS-1$
         rows.add(new String[] { Messages.StressTables_governing,
-                r.governing() == null ? Messages.StressTables_noLimits : r.governing().name(), "" }); //$NON-NLS-1$
-        for (Map.Entry<Criterion, Double> e : r.utilisations().entrySet()) {
-            rows.add(row(NLS.bind(Messages.StressTables_utilisationOf, e.getKey().name()), e.getValue(), "")); //$NON-NLS-1$
+                r.governing() == null ? Messages.StressTables_noLimits : r.governing(), "" }); //$NON-NLS-1$
+        for (Map.Entry<String, Double> e : r.utilisations().entrySet()) {
+            rows.add(row(NLS.bind(Messages.StressTables_utilisationOf, e.getKey()), e.getValue(), "")); //$NON-NLS-1$
+        }
+        CheckResult fatigue = r.fatigue() == null ? null : r.fatigue().governing();
+        if (fatigue != null) {
+            rows.add(row(Messages.StressTables_fatigueUtilisation, fatigue.utilisation(), "")); //$NON-NLS-1$
+            rows.add(new String[] { Messages.StressTables_fatigueGoverning,
+                    fatigue.criterion() + " (" + fatigue.caseId() + ")", "" }); //$NON-NLS-1$ //$NON-NLS-2$ //$NON-NLS-3$
         }
         fill(values, rows);
 

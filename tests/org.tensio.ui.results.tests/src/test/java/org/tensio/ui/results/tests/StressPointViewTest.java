@@ -119,7 +119,7 @@ class StressPointViewTest {
         }
         // utilisation and governing criterion at the point: the check's, to the round-off between the check's
         // unit-field superposition and the point evaluation (UnitStressField Javadoc: equal to round-off)
-        assertEquals("maxShear", r.governing().name());
+        assertEquals("maxShear", r.governing());
         assertEquals(check.get("utilisation").getAsDouble(), r.utilisation(), 1e-9, "utilisation");
 
         // the table, as the user reads it
