@@ -3,8 +3,8 @@ package org.tensio.ui.tests;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.tensio.ui.tests.UiConditions.find;
-import static org.tensio.ui.tests.UiConditions.waitUntil;
+import static org.tensio.ui.testsupport.UiConditions.find;
+import static org.tensio.ui.testsupport.UiConditions.waitUntil;
 
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -25,6 +25,8 @@ import org.eclipse.ui.PlatformUI;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.tensio.ui.testsupport.Screenshots;
+import org.tensio.ui.testsupport.UiConditions;
 import org.tensio.ui.views.SectionsView;
 
 /** The Tensio perspective and the Sections view, driven in the running workbench (UI thread). */

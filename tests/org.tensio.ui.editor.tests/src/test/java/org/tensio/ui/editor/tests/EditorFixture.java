@@ -1,13 +1,14 @@
 package org.tensio.ui.editor.tests;
 
 import static org.junit.jupiter.api.Assertions.assertNotNull;
-import static org.tensio.ui.editor.tests.UiConditions.waitUntil;
+import static org.tensio.ui.testsupport.UiConditions.waitUntil;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.time.Duration;
 
+import org.eclipse.draw2d.FigureCanvas;
 import org.eclipse.draw2d.geometry.Point;
 import org.eclipse.gef.EditPart;
 import org.eclipse.gef.RequestConstants;
@@ -15,6 +16,7 @@ import org.eclipse.gef.commands.Command;
 import org.eclipse.gef.editparts.ZoomManager;
 import org.eclipse.gef.requests.ChangeBoundsRequest;
 import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.Shell;
 import org.eclipse.ui.IWorkbenchPage;
 import org.eclipse.ui.PlatformUI;
 import org.tensio.ui.editor.model.Vertex;
@@ -22,12 +24,17 @@ import org.tensio.ui.editor.parts.SectionEditPart;
 import org.tensio.ui.editor.parts.VertexEditPart;
 import org.tensio.ui.editor.ui.ProjectEditor;
 import org.tensio.ui.editor.ui.ProjectEditors;
+import org.tensio.ui.testsupport.Screenshots;
+import org.tensio.ui.testsupport.SelectionSourceView;
+import org.tensio.ui.testsupport.UiConditions;
 
 /** Opens project files in the editor and drives its drawing through GEF requests. */
 final class EditorFixture {
 
     static final Duration TIMEOUT = Duration.ofSeconds(90);
     static final String PERSPECTIVE_ID = "org.tensio.ui.perspective";
+    /** Id of the {@link SelectionSourceView} stand-in for the results tree (plugin.xml of this bundle). */
+    static final String STAND_IN_RESULTS_VIEW_ID = "org.tensio.ui.editor.tests.standInResults";
 
     private EditorFixture() {
     }
@@ -86,5 +93,15 @@ final class EditorFixture {
 
     static Display display(ProjectEditor editor) {
         return editor.getSite().getShell().getDisplay();
+    }
+
+    /**
+     * Paints now what draw2d has deferred in every figure canvas of {@code shell}: the {@code paintPending} action
+     * of {@link Screenshots} for the editor's drawing.
+     */
+    static void paintFigures(Shell shell) {
+        for (FigureCanvas canvas : UiConditions.find(shell, FigureCanvas.class, c -> true)) {
+            canvas.getLightweightSystem().getUpdateManager().performUpdate();
+        }
     }
 }

@@ -4,7 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.tensio.ui.editor.tests.EditorFixture.TIMEOUT;
-import static org.tensio.ui.editor.tests.UiConditions.waitUntil;
+import static org.tensio.ui.testsupport.UiConditions.waitUntil;
 
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -25,6 +25,8 @@ import org.tensio.ui.editor.parts.PartEditPart;
 import org.tensio.ui.editor.ui.ProjectEditor;
 import org.tensio.ui.editor.validation.ProblemMarkers;
 import org.tensio.ui.editor.wizards.NewProjectWizard;
+import org.tensio.ui.testsupport.Screenshots;
+import org.tensio.ui.testsupport.SelectionSourceView;
 
 import com.google.gson.JsonParser;
 
@@ -59,7 +61,8 @@ class PagesTest {
         assertTrue(editor.problems().get(0).path().startsWith("$.materials.S355"), editor.problems().toString());
         assertTrue(editor.table(0).problems().contains("S355"), "the table page shows the message: "
                 + editor.table(0).problems());
-        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-materials-table.png");
+        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-materials-table.png",
+                EditorFixture::paintFigures);
         editor.getCommandStack().undo();
         assertEquals(210000, s355.node().get("E").getAsDouble());
         waitUntil(display, TIMEOUT, "the marker to go", () -> editor.problems().isEmpty() && count(markers) == 0
@@ -127,7 +130,8 @@ class PagesTest {
         var display = EditorFixture.display(editor);
         waitUntil(display, TIMEOUT, "the template's contour", () -> editor.contour() != null && !editor.contourBusy()
                 && "ULS".equals(editor.contour().request().caseId()));
-        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-template-composite.png");
+        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-template-composite.png",
+                EditorFixture::paintFigures);
     }
 
     @Test
@@ -140,7 +144,8 @@ class PagesTest {
         editor.stationsPage().choose(station, "idler_axle");
         assertEquals("idler_axle", station.section());
         assertTrue(editor.isDirty());
-        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-stations-table.png");
+        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-stations-table.png",
+                EditorFixture::paintFigures);
         editor.getCommandStack().undo();
         assertEquals("drive_shaft", station.section());
     }
@@ -150,7 +155,7 @@ class PagesTest {
         Path file = EditorFixture.demoCopy(dir);
         ProjectEditor editor = EditorFixture.open(page, file);
         editor.showSection("drive_shaft");
-        StandInResultsView results = (StandInResultsView) page.showView(StandInResultsView.ID);
+        SelectionSourceView results = (SelectionSourceView) page.showView(EditorFixture.STAND_IN_RESULTS_VIEW_ID);
         var display = EditorFixture.display(editor);
         Path project = file.toAbsolutePath().normalize();
         results.select(new org.tensio.ui.selection.StationRef(project, "bracket_root", "Q"));
@@ -164,7 +169,8 @@ class PagesTest {
         page.activate(editor);
         waitUntil(display, TIMEOUT, "the ULS contour", () -> editor.contour() != null && !editor.contourBusy()
                 && "ULS".equals(editor.contour().request().caseId()));
-        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-point-from-results.png");
+        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-point-from-results.png",
+                EditorFixture::paintFigures);
     }
 
     @Test

@@ -4,7 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.tensio.ui.editor.tests.EditorFixture.TIMEOUT;
-import static org.tensio.ui.editor.tests.UiConditions.waitUntil;
+import static org.tensio.ui.testsupport.UiConditions.waitUntil;
 
 import java.nio.file.Path;
 
@@ -20,6 +20,8 @@ import org.tensio.ui.editor.overlay.Quantity;
 import org.tensio.ui.editor.parts.PartEditPart;
 import org.tensio.ui.editor.preferences.EditorPreferences;
 import org.tensio.ui.editor.ui.ProjectEditor;
+import org.tensio.ui.testsupport.Screenshots;
+import org.tensio.ui.testsupport.UiConditions;
 
 /** Preferences change the contour (colour scale, mesh density); the Properties view shows a part. */
 class PreferencesTest {
@@ -58,12 +60,14 @@ class PreferencesTest {
         waitUntil(display, TIMEOUT, "the bottom flange in the darkest grey", () -> {
             org.eclipse.draw2d.geometry.Point p = new org.eclipse.draw2d.geometry.Point(t.fx(40), t.fy(-145));
             EditorFixture.section(editor).getContentPane().translateToAbsolute(p);
-            return expected.equals(Screenshots.pixel(editor.graphicalViewer().getControl(), p.x, p.y));
+            return expected.equals(Screenshots.pixel(editor.graphicalViewer().getControl(), p.x, p.y,
+                    EditorFixture::paintFigures));
         });
         editor.showMesh(true);
         assertEquals(3 * editor.contour().elementCount(), editor.overlayFigure().meshEdgeCount(),
                 "three edges drawn per triangle");
-        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-grey-coarse-mesh.png");
+        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-grey-coarse-mesh.png",
+                EditorFixture::paintFigures);
     }
 
     @Test
@@ -79,7 +83,7 @@ class PreferencesTest {
         waitUntil(display, TIMEOUT, "the Properties view to list the profile parameters",
                 () -> !UiConditions.find(shell, Tree.class, tree -> has(tree, "overallDepth")).isEmpty());
         assertFalse(view == null);
-        Screenshots.save(shell, "editor-properties-view.png");
+        Screenshots.save(shell, "editor-properties-view.png", EditorFixture::paintFigures);
     }
 
     private static boolean has(Tree tree, String text) {

@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.tensio.ui.editor.tests.EditorFixture.TIMEOUT;
-import static org.tensio.ui.editor.tests.UiConditions.waitUntil;
+import static org.tensio.ui.testsupport.UiConditions.waitUntil;
 
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -31,6 +31,8 @@ import org.tensio.ui.editor.overlay.Quantity;
 import org.tensio.ui.editor.ui.ProjectEditor;
 import org.tensio.ui.editor.validation.ProblemMarkers;
 import org.tensio.ui.selection.SectionPoint;
+import org.tensio.ui.testsupport.Screenshots;
+import org.tensio.ui.testsupport.UiConditions;
 
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
@@ -71,7 +73,7 @@ class ProjectEditorTest {
         editor.fit();
         waitUntil(EditorFixture.display(editor), TIMEOUT, "validation of the move",
                 () -> editor.project() != null && editor.problems().isEmpty());
-        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-vertex-moved.png");
+        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-vertex-moved.png", EditorFixture::paintFigures);
 
         editor.getCommandStack().undo();
         assertEquals(0, corner.x(), 0);
@@ -126,7 +128,8 @@ class ProjectEditorTest {
         page.showView("org.eclipse.ui.views.ProblemView");
         page.activate(editor);
         UiConditions.flush(display);
-        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-invalid-marker.png");
+        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-invalid-marker.png",
+                EditorFixture::paintFigures);
 
         editor.getCommandStack().undo();
         waitUntil(display, TIMEOUT, "the marker to go", () -> find(markers).isEmpty());
@@ -168,14 +171,16 @@ class ProjectEditorTest {
         waitUntil(display, TIMEOUT, "the screen to show the highest band in the bottom flange",
                 () -> band(ColourScale.BANDS_COUNT - 1).equals(screenAt(editor, 40, -145)));
         assertEquals(band(0), screenAt(editor, -40, 145), "top flange colour");
-        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-contour-sigma-uls.png");
+        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-contour-sigma-uls.png",
+                EditorFixture::paintFigures);
 
         editor.showQuantity(Quantity.UTILISATION);
         waitUntil(display, TIMEOUT, "the utilisation contour", () -> editor.contour() != null
                 && !editor.contourBusy() && editor.contour().request().quantity() == Quantity.UTILISATION);
         assertTrue(editor.contour().max() > 0);
         UiConditions.flush(display);
-        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-contour-utilisation-uls.png");
+        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-contour-utilisation-uls.png",
+                EditorFixture::paintFigures);
     }
 
     @Test
@@ -219,7 +224,7 @@ class ProjectEditorTest {
         var t = EditorFixture.section(editor).transform();
         org.eclipse.draw2d.geometry.Point p = new org.eclipse.draw2d.geometry.Point(t.fx(x), t.fy(y));
         EditorFixture.section(editor).getContentPane().translateToAbsolute(p);
-        return Screenshots.pixel(editor.graphicalViewer().getControl(), p.x, p.y);
+        return Screenshots.pixel(editor.graphicalViewer().getControl(), p.x, p.y, EditorFixture::paintFigures);
     }
 
     private static List<IMarker> find(ProblemMarkers markers) {

@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.tensio.ui.editor.tests.EditorFixture.TIMEOUT;
-import static org.tensio.ui.editor.tests.UiConditions.waitUntil;
+import static org.tensio.ui.testsupport.UiConditions.waitUntil;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -27,6 +27,8 @@ import org.tensio.ui.editor.parts.PartEditPart;
 import org.tensio.ui.editor.ui.ProjectEditor;
 import org.tensio.ui.selection.SectionPoint;
 import org.tensio.ui.selection.SectionPointerSource;
+import org.tensio.ui.testsupport.Screenshots;
+import org.tensio.ui.testsupport.UiConditions;
 
 /** Editing through the workbench's commands and handlers (menus call the same), save-as and the pointer source. */
 class WorkbenchCommandsTest {
@@ -75,7 +77,7 @@ class WorkbenchCommandsTest {
         waitUntil(display, TIMEOUT, "validation of the new hole", () -> editor.project() != null
                 && editor.project().section("bracket").parts().get(0).region().holes().size() == 2);
         assertTrue(editor.problems().isEmpty(), editor.problems().toString());
-        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-hole-added.png");
+        Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-hole-added.png", EditorFixture::paintFigures);
 
         for (int i = 0; i < 5; i++) {
             handlers.executeCommand("org.eclipse.ui.edit.undo", null);

@@ -25,6 +25,8 @@ import org.tensio.ui.results.markers.CheckMarkers;
 import org.tensio.ui.results.markers.ExternalFiles;
 import org.tensio.ui.results.preferences.ResultsPreferences;
 import org.tensio.ui.results.views.ResultsView;
+import org.tensio.ui.testsupport.Screenshots;
+import org.tensio.ui.testsupport.UiConditions;
 
 /**
  * Problems markers of the checks appear and clear as results change. Hand numbers (exact beam theory,

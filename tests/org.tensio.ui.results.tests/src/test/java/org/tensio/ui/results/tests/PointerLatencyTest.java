@@ -24,6 +24,9 @@ import org.tensio.ui.results.stress.PointEvaluator;
 import org.tensio.ui.results.stress.PreparedSection;
 import org.tensio.ui.results.stress.StressPointView;
 import org.tensio.ui.selection.SectionPoint;
+import org.tensio.ui.testsupport.PointerSourceView;
+import org.tensio.ui.testsupport.Screenshots;
+import org.tensio.ui.testsupport.UiConditions;
 
 /**
  * How long the stress-point view takes from a pointer move to a painted update on a section meshed with about
@@ -52,7 +55,7 @@ class PointerLatencyTest {
         stress.setPinned(false);
         stress.sections().put(new PreparedSection(demo, project, beam, engine.properties(beam), fine));
         try {
-            PointerSourceView source = (PointerSourceView) wb.page.showView(PointerSourceView.ID);
+            PointerSourceView source = (PointerSourceView) wb.page.showView(WorkbenchFixture.POINTER_SOURCE_VIEW_ID);
             wb.page.activate(source);
             UiConditions.flush(wb.display);
             Canvas drawing = UiConditions.find(wb.window.getShell(), Canvas.class,

@@ -15,6 +15,8 @@ import org.eclipse.ui.dialogs.PreferencesUtil;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.tensio.ui.results.preferences.ResultsPreferences;
+import org.tensio.ui.testsupport.Screenshots;
+import org.tensio.ui.testsupport.UiConditions;
 
 /** The preference page "Tensio Checks": the warning threshold, default 0.9, accepted only in (0, 1]. */
 class PreferencePageTest {

@@ -26,6 +26,8 @@ import org.tensio.engine.checks.CheckResult;
 import org.tensio.ui.results.model.ResultNode;
 import org.tensio.ui.results.model.ResultsFilter;
 import org.tensio.ui.results.views.ResultsView;
+import org.tensio.ui.testsupport.Screenshots;
+import org.tensio.ui.testsupport.UiConditions;
 import org.tensio.ui.views.SectionsView;
 
 import com.google.gson.JsonArray;

@@ -19,6 +19,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.tensio.ui.results.views.ResultsView;
 import org.tensio.ui.selection.SectionPoint;
 import org.tensio.ui.selection.StationRef;
+import org.tensio.ui.testsupport.PointerSourceView;
 
 /**
  * The selection contract of {@code org.tensio.ui.selection} as the results tree uses it: a part that publishes a
@@ -50,9 +51,9 @@ class SelectionContractTest {
 
         // another part (the editor's stand-in) publishes a station of the demo: the tree follows
         Path demo = WorkbenchFixture.demo();
-        PointerSourceView source = (PointerSourceView) wb.page.showView(PointerSourceView.ID);
+        PointerSourceView source = (PointerSourceView) wb.page.showView(WorkbenchFixture.POINTER_SOURCE_VIEW_ID);
         wb.page.activate(source);
-        source.publish(new StationRef(demo, "bracket_root", null));
+        source.select(new StationRef(demo, "bracket_root", null));
         wb.waitForResults(view, demo);
 
         // a station node publishes a StationRef, a point node a SectionPoint at its governing point

@@ -22,6 +22,8 @@ import org.tensio.ui.results.stress.PointReport;
 import org.tensio.ui.results.stress.StressPointView;
 import org.tensio.ui.results.views.ResultsView;
 import org.tensio.ui.selection.SectionPoint;
+import org.tensio.ui.testsupport.Screenshots;
+import org.tensio.ui.testsupport.UiConditions;
 
 import com.google.gson.JsonObject;
 

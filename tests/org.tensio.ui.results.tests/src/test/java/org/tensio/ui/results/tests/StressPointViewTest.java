@@ -29,6 +29,9 @@ import org.tensio.ui.results.stress.PointReport;
 import org.tensio.ui.results.stress.StressPointView;
 import org.tensio.ui.results.views.ResultsView;
 import org.tensio.ui.selection.SectionPoint;
+import org.tensio.ui.testsupport.PointerSourceView;
+import org.tensio.ui.testsupport.Screenshots;
+import org.tensio.ui.testsupport.UiConditions;
 
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
@@ -154,7 +157,7 @@ class StressPointViewTest {
         Path demo = WorkbenchFixture.demo();
         StressPointView stress = (StressPointView) wb.page.showView(StressPointView.ID);
         stress.setPinned(false);
-        PointerSourceView source = (PointerSourceView) wb.page.showView(PointerSourceView.ID);
+        PointerSourceView source = (PointerSourceView) wb.page.showView(WorkbenchFixture.POINTER_SOURCE_VIEW_ID);
         wb.page.activate(source);
         UiConditions.flush(wb.display);
         assertEquals(1, source.listenerCount(), "the stress-point view listens to the active part's pointer");

@@ -19,12 +19,15 @@ import org.eclipse.ui.PlatformUI;
 import org.tensio.ui.results.model.NodeKind;
 import org.tensio.ui.results.model.ResultNode;
 import org.tensio.ui.results.views.ResultsView;
+import org.tensio.ui.testsupport.UiConditions;
 
 /** The running workbench in the Tensio perspective, a large window for screenshots, and the demo file. */
 final class WorkbenchFixture {
 
     static final String PERSPECTIVE_ID = "org.tensio.ui.perspective";
     static final Duration TIMEOUT = Duration.ofSeconds(120);
+    /** Id of the {@link org.tensio.ui.testsupport.PointerSourceView} stand-in for the section editor (plugin.xml). */
+    static final String POINTER_SOURCE_VIEW_ID = "org.tensio.ui.results.tests.pointerSource";
 
     final IWorkbenchWindow window;
     final IWorkbenchPage page;

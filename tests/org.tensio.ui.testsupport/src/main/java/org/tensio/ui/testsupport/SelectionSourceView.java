@@ -1,5 +1,6 @@
-package org.tensio.example.tests;
+package org.tensio.ui.testsupport;
 
+import org.eclipse.core.runtime.ListenerList;
 import org.eclipse.jface.viewers.ISelection;
 import org.eclipse.jface.viewers.ISelectionChangedListener;
 import org.eclipse.jface.viewers.ISelectionProvider;
@@ -9,10 +10,14 @@ import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.ui.part.ViewPart;
-import org.eclipse.core.runtime.ListenerList;
 
-/** A test view that publishes a selection it is told, as a Tensio view publishes a selected point. */
-public final class PointSourceView extends ViewPart implements ISelectionProvider {
+/**
+ * A stand-in view for a Tensio view that publishes selections (the results tree, the section editor): it is its
+ * site's selection provider and publishes whatever a test tells it, typically a
+ * {@link org.tensio.ui.selection.SectionPoint} or a {@link org.tensio.ui.selection.StationRef}. It shows one label
+ * with its part name. Declare it in the test bundle's plugin.xml under the id the test opens. UI thread only.
+ */
+public class SelectionSourceView extends ViewPart implements ISelectionProvider {
 
     private final ListenerList<ISelectionChangedListener> listeners = new ListenerList<>();
     private ISelection selection = StructuredSelection.EMPTY;
@@ -21,17 +26,18 @@ public final class PointSourceView extends ViewPart implements ISelectionProvide
     @Override
     public void createPartControl(Composite parent) {
         label = new Label(parent, SWT.NONE);
-        label.setText("test point source");
+        label.setText(getPartName());
         getSite().setSelectionProvider(this);
     }
 
-    /** Publishes {@code element} as the selection. UI thread. */
+    /** Publishes {@code element} as this part's selection (a one-element structured selection). */
     public void select(Object element) {
-        selection = new StructuredSelection(element);
-        SelectionChangedEvent e = new SelectionChangedEvent(this, selection);
-        for (ISelectionChangedListener l : listeners) {
-            l.selectionChanged(e);
-        }
+        setSelection(new StructuredSelection(element));
+    }
+
+    @Override
+    public void setFocus() {
+        label.setFocus();
     }
 
     @Override
@@ -49,13 +55,13 @@ public final class PointSourceView extends ViewPart implements ISelectionProvide
         return selection;
     }
 
+    /** Sets the selection and tells every listener, also when it equals the previous one. */
     @Override
     public void setSelection(ISelection s) {
-        select(((StructuredSelection) s).getFirstElement());
-    }
-
-    @Override
-    public void setFocus() {
-        label.setFocus();
+        selection = s;
+        SelectionChangedEvent e = new SelectionChangedEvent(this, s);
+        for (ISelectionChangedListener l : listeners) {
+            l.selectionChanged(e);
+        }
     }
 }
