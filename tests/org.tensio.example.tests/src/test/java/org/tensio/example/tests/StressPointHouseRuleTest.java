@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Duration;
 
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.TableItem;
@@ -23,6 +24,7 @@ import org.tensio.engine.service.SectionAnalysisService;
 import org.tensio.ui.results.stress.PointReport;
 import org.tensio.ui.results.stress.StressPointView;
 import org.tensio.ui.selection.SectionPoint;
+import org.tensio.ui.testsupport.UiConditions;
 
 /**
  * The stress-point view evaluates a contributed criterion at a point like the built-in ones: at the check's
@@ -51,14 +53,8 @@ class StressPointHouseRuleTest {
             StressPointView view = (StressPointView) page.showView(StressPointView.ID);
             view.setPinned(false);
             view.show(new SectionPoint(file, "gearbox_end", "spindle", "jammed", house.point().x(), house.point().y()));
-            Display display = Display.getCurrent();
-            long end = System.currentTimeMillis() + 30_000;
-            while (view.report() == null && System.currentTimeMillis() < end) {
-                display.timerExec(50, () -> { });
-                if (!display.readAndDispatch()) {
-                    display.sleep();
-                }
-            }
+            UiConditions.waitUntil(Display.getCurrent(), Duration.ofSeconds(30), "the view to evaluate the point",
+                    () -> view.report() != null);
             PointReport r = view.report();
             assertNotNull(r, "the view evaluated the point");
             Double u = r.utilisations().get("houseCombined");
