@@ -43,6 +43,7 @@ public final class Messages extends NLS {
     public static String StressTables_governing;
     public static String StressTables_fatigueUtilisation;
     public static String StressTables_fatigueGoverning;
+    public static String StressTables_fatigueHistory;
     public static String StressTables_noLimits;
     public static String StressTables_unavailable;
     public static String StressTables_total;

@@ -96,8 +96,8 @@ final class StressTables {
         CheckResult fatigue = r.fatigue() == null ? null : r.fatigue().governing();
         if (fatigue != null) {
             rows.add(row(Messages.StressTables_fatigueUtilisation, fatigue.utilisation(), "")); //$NON-NLS-1$
-            rows.add(new String[] { Messages.StressTables_fatigueGoverning,
-                    fatigue.criterion() + " (" + fatigue.caseId() + ")", "" }); //$NON-NLS-1$ //$NON-NLS-2$ //$NON-NLS-3$
+            rows.add(new String[] { Messages.StressTables_fatigueGoverning, fatigue.criterion(), "" }); //$NON-NLS-1$
+            rows.add(new String[] { Messages.StressTables_fatigueHistory, fatigue.caseId(), "" }); //$NON-NLS-1$
         }
         fill(values, rows);
 
