@@ -41,24 +41,23 @@ final class ProjectDocument {
 
     private void load(String text) {
         rawText = text;
+        ProjectModel read = null;
         try {
-            ProjectModel read = ProjectModel.parse(text.startsWith(BOM) ? text.substring(1) : text);
-            if (model == null) {
-                model = read;
-                model.addPropertyChangeListener(e -> {
-                    if (ProjectModel.DOCUMENT.equals(e.getPropertyName())) {
-                        replaced.run();
-                    }
-                });
-            } else {
-                model.replace(read.toJson());
-            }
+            read = ProjectModel.parse(text.startsWith(BOM) ? text.substring(1) : text);
             unreadable = null;
         } catch (IllegalArgumentException e) {
-            if (model == null) {
-                model = ProjectModel.parse("{}"); //$NON-NLS-1$
-            }
             unreadable = e.getMessage();
+        }
+        if (model == null) {
+            // listen also when the first read failed: a later reload or raw-text edit must refresh the pages
+            model = read != null ? read : ProjectModel.parse("{}"); //$NON-NLS-1$
+            model.addPropertyChangeListener(e -> {
+                if (ProjectModel.DOCUMENT.equals(e.getPropertyName())) {
+                    replaced.run();
+                }
+            });
+        } else if (read != null) {
+            model.replace(read.toJson());
         }
     }
 
