@@ -2,7 +2,6 @@ package org.tensio.engine.internal;
 
 import java.io.IOException;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -36,8 +35,10 @@ import org.tensio.engine.stress.PointStressOp;
 import org.tensio.engine.stress.ShearMethod;
 
 /**
- * The engine service. Thread-safe: the only state is a small LRU cache of finite-element solutions keyed by
- * section instance (identity), so a project read once is solved once.
+ * The engine service. Thread-safe: its state is a small LRU cache of finite-element solutions keyed by
+ * section instance (identity), so a project read once is solved once, and the contributions DS binds, guarded by
+ * their own lock. Binding or unbinding a contribution validates that one only; the {@link Extensions} in force
+ * are rebuilt once, on the next use after a change, not on every bind.
  */
 @Component(service = SectionAnalysisService.class)
 public final class SectionAnalysisServiceImpl implements SectionAnalysisService {
@@ -57,9 +58,14 @@ public final class SectionAnalysisServiceImpl implements SectionAnalysisService 
         }
     };
 
+    /** Guards the bound contributions; DS may bind and unbind from several threads. */
     private final Object lock = new Object();
-    private final List<CheckCriterion> boundCriteria = new ArrayList<>();
-    private final List<ProfileType> boundProfileTypes = new ArrayList<>();
+    private final System.Logger log = System.getLogger(getClass().getName());
+    private final BoundContributions<CheckCriterion> boundCriteria = new BoundContributions<>(CheckCriterion::id,
+            c -> Extensions.of(c, List.of()), log);
+    private final BoundContributions<ProfileType> boundProfileTypes = new BoundContributions<>(ProfileType::type,
+            p -> Extensions.of(List.of(), p), log);
+    /** The extensions in force; null after a bind or unbind until the next use rebuilds them (under the lock). */
     private volatile Extensions extensions;
 
     /** The DS component (contributions arrive through the references below) or an engine without any. */
@@ -72,73 +78,67 @@ public final class SectionAnalysisServiceImpl implements SectionAnalysisService 
         this.extensions = extensions == null ? Extensions.none() : extensions;
     }
 
-    /** DS: a contributed criterion service (registered by org.tensio.extensions from the extension registry). */
+    /**
+     * DS: a contributed criterion service (registered by org.tensio.extensions from the extension registry). A
+     * malformed or built-in id, or an id already bound, is refused and logged; of clashing contributions the first
+     * bound is in force.
+     */
     @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
             policyOption = ReferencePolicyOption.GREEDY)
     void addCriterion(CheckCriterion criterion) {
         synchronized (lock) {
             boundCriteria.add(criterion);
-            rebuild();
+            extensions = null;
         }
     }
 
     void removeCriterion(CheckCriterion criterion) {
         synchronized (lock) {
             boundCriteria.remove(criterion);
-            rebuild();
+            extensions = null;
         }
     }
 
-    /** DS: a contributed profile type service. */
+    /** DS: a contributed profile type service; refused and logged like {@link #addCriterion}. */
     @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC,
             policyOption = ReferencePolicyOption.GREEDY)
     void addProfileType(ProfileType type) {
         synchronized (lock) {
             boundProfileTypes.add(type);
-            rebuild();
+            extensions = null;
         }
     }
 
     void removeProfileType(ProfileType type) {
         synchronized (lock) {
             boundProfileTypes.remove(type);
-            rebuild();
+            extensions = null;
         }
     }
 
-    /** Keeps the first of clashing contributions (the clash is reported by {@link Extensions#of}'s message). */
-    private void rebuild() {
-        List<CheckCriterion> c = new ArrayList<>();
-        for (CheckCriterion k : boundCriteria) {
-            c.add(k);
-            try {
-                Extensions.of(c, List.of());
-            } catch (IllegalArgumentException e) {
-                c.remove(c.size() - 1);
-                System.getLogger(getClass().getName()).log(System.Logger.Level.WARNING, e.getMessage());
-            }
-        }
-        List<ProfileType> p = new ArrayList<>();
-        for (ProfileType t : boundProfileTypes) {
-            p.add(t);
-            try {
-                Extensions.of(List.of(), p);
-            } catch (IllegalArgumentException e) {
-                p.remove(p.size() - 1);
-                System.getLogger(getClass().getName()).log(System.Logger.Level.WARNING, e.getMessage());
-            }
-        }
-        extensions = Extensions.of(c, p);
-    }
-
+    /**
+     * The contributions in force. After binds or unbinds the first call rebuilds them once from the bound
+     * contributions (each was validated when bound, so this build does not throw); later calls return that
+     * instance.
+     */
     @Override
     public Extensions extensions() {
-        return extensions;
+        Extensions e = extensions;
+        if (e == null) {
+            synchronized (lock) {
+                e = extensions;
+                if (e == null) {
+                    e = Extensions.of(boundCriteria.inForce(), boundProfileTypes.inForce());
+                    extensions = e;
+                }
+            }
+        }
+        return e;
     }
 
     @Override
     public Project readProject(Path file) throws ProjectFormatException, IOException {
-        return ProjectReader.read(file, extensions);
+        return ProjectReader.read(file, extensions());
     }
 
     @Override
@@ -148,7 +148,7 @@ public final class SectionAnalysisServiceImpl implements SectionAnalysisService 
 
     @Override
     public Project parseProject(String json, String sourceName, Path baseDir) throws ProjectFormatException {
-        return ProjectReader.parse(json, sourceName, baseDir, extensions);
+        return ProjectReader.parse(json, sourceName, baseDir, extensions());
     }
 
     @Override
