@@ -143,6 +143,35 @@ assert d["maxUtilisation"]==max(x["utilisation"] for x in d["results"])
 assert {x["case"] for x in f}=={"running","start_up"}
 '; then ok "check demo --format json: 12 fatigue rows with factors, n = 1/utilisation"; else bad "fatigue json" "$work/out"; fi
 
+# 9c. stress at the check's fatigue point: the same numbers (same rules at the same point, round-off only)
+cp "$work/out" "$work/check.json"
+xy=$(python3 -c '
+import json,sys
+d=json.load(open(sys.argv[1]))
+g=[x for x in d["results"] if x["station"]=="drive_shaft_sprocket" and x["case"]=="running" and x["criterion"]=="fatigueGoodman"][0]
+print("%r,%r" % (g["point"]["x"], g["point"]["y"]))' "$work/check.json")
+if run stress-fatigue 0 -- stress "$demo" --station drive_shaft_sprocket --case ULS --at "$xy" --format json && python3 -c '
+import json,sys
+s=json.load(open(sys.argv[1])); c=json.load(open(sys.argv[2]))
+f=s["fatigue"]; assert f["onSurface"] is True, f
+assert len(f["results"])==12, len(f["results"])
+for r in f["results"]:
+    m=[x for x in c["results"] if x["station"]=="drive_shaft_sprocket" and x["case"]==r["history"] and x["criterion"]==r["criterion"]][0]
+    if (m["point"]["x"],m["point"]["y"])==tuple(s["point"][k] for k in "xy"):
+        for k in "n sigmaA sigmaM".split(): assert abs(r["fatigue"][k]-m["fatigue"][k])<=1e-9*abs(m["fatigue"][k])+1e-12, (k,r,m)
+        for k in "Se Kf Kfs".split(): assert abs(r["fatigue"]["factors"][k]-m["fatigue"]["factors"][k])<=1e-12*m["fatigue"]["factors"][k], k
+    assert abs(r["utilisation"]*r["fatigue"]["n"]-1)<1e-12
+assert "sensitive" in f["caution"]
+' "$work/out" "$work/check.json"; then ok "stress at the fatigue governing point: fatigue object equal to check's"; else bad "stress fatigue" "$work/out"; fi
+if run stress-fatigue-inside 0 -- stress "$demo" --station drive_shaft_sprocket --case ULS --at 0,0 --format json && py '
+import json,sys
+f=json.load(open(sys.argv[1]))["fatigue"]
+assert f["onSurface"] is False and abs(f["surfaceDistance"]-30)<0.05, f["surfaceDistance"]
+assert all(r["fatigue"]["factors"]["Kf"]==1 and r["fatigue"]["factors"]["Kfs"]==1 for r in f["results"])
+'; then ok "stress at the shaft axis: inside, no notch factors"; else bad "stress fatigue inside" "$work/out"; fi
+if run stress-fatigue-text 0 -- stress "$demo" --station drive_shaft_sprocket --case ULS --at 0,0 && grep -q "Fatigue at this point" "$work/out" && grep -q "fatigueGoodman" "$work/out"; then
+  ok "stress text: fatigue block"; else bad "stress fatigue text" "$work/out"; fi
+
 # 10-15. bad input: exit 2, one line naming the field or value, no stack trace
 badcase() { # name, expected substring, args...
   local name=$1 want=$2; shift 2
@@ -156,6 +185,7 @@ badcase bad-format "csv" check "$work/pass.json" --format xml
 badcase env-unknown-station "nowhere" envelope "$work/pass.json" --station nowhere
 badcase env-no-station "station" envelope "$work/pass.json"
 badcase env-bad-limit "--limit" envelope "$work/pass.json" --station A --limit -3
+badcase stress-bad-tolerance "--surface-tolerance" stress "$demo" --station drive_shaft_sprocket --case ULS --at 0,0 --surface-tolerance -1
 python3 - "$work/pass.json" "$work/fatigue-bad.json" <<'PY'
 import json,sys
 d=json.load(open(sys.argv[1]))

@@ -30,7 +30,8 @@ import org.tensio.ui.selection.SectionPoint;
  * Mises stress when the material has no limits). Contributed criteria of the material count like the built-in
  * ones. When the station has a fatigue check, the report also carries the fatigue results at the point for every
  * load history and fatigue criterion ({@link org.tensio.engine.checks.FatiguePointOp}, the rules of the check;
- * notches on the surface act within {@link #SURFACE_TOLERANCE} of the boundary); a station without load cases
+ * notches on the surface act within
+ * {@link org.tensio.engine.checks.FatiguePointOp#defaultSurfaceTolerance()} of the boundary); a station without load cases
  * whose fatigue histories give the forces shows the static state under no load ({@link #NO_CASE}).
  */
 public final class PointEvaluator {
@@ -75,13 +76,6 @@ public final class PointEvaluator {
     /** The case id shown for a station without load cases whose fatigue histories give its forces. */
     public static final String NO_CASE = "\u2014"; //$NON-NLS-1$
 
-    /**
-     * Points within this fraction of the section's bounding-box diagonal from its boundary count as on the
-     * surface for the fatigue notches that act there (about four pixels at the editor's fitted zoom), so that the
-     * outer fibre can be reached with the pointer; the tree's governing points lie on it exactly. Common
-     * practice, no source.
-     */
-    public static final double SURFACE_TOLERANCE = 0.005;
 
     private static PointReport fatigue(PreparedSection p, String stationId, Point2 at, PointReport r) {
         if (p.fatigue() == null) {
@@ -93,8 +87,7 @@ public final class PointEvaluator {
             return r;
         }
         try {
-            return r.withFatigue(p.fatigue().evaluate(stationId, at,
-                    SURFACE_TOLERANCE * p.section().bounds().diagonal()), null);
+            return r.withFatigue(p.fatigue().evaluate(stationId, at, p.fatigue().defaultSurfaceTolerance()), null);
         } catch (IllegalArgumentException e) {
             return r.withFatigue(null, e.getMessage());
         }
