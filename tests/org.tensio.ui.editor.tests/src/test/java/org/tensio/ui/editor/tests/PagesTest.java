@@ -23,6 +23,7 @@ import org.tensio.ui.editor.pages.Row;
 import org.tensio.ui.editor.pages.Tables;
 import org.tensio.ui.editor.parts.PartEditPart;
 import org.tensio.ui.editor.ui.ProjectEditor;
+import org.tensio.ui.editor.ui.ProjectEditors;
 import org.tensio.ui.editor.validation.ProblemMarkers;
 import org.tensio.ui.editor.wizards.NewProjectWizard;
 import org.tensio.ui.testsupport.Screenshots;
@@ -117,6 +118,21 @@ class PagesTest {
         assertEquals(31, editor.model().section("drive_shaft").parts().get(0).profile().parameter("radius").getAsDouble());
         assertFalse(editor.isDirty());
         assertFalse(editor.checkExternalChange(), "reloaded: the editor knows the new content");
+    }
+
+    /** A file that is not JSON when opened, fixed outside and reloaded: the section page shows its sections. */
+    @Test
+    void aFileUnreadableAtOpenShowsItsSectionsOnceFixed(@TempDir Path dir) throws Exception {
+        String good = Files.readString(EditorFixture.demoCopy(dir));
+        Path file = dir.resolve("broken.tensio.json");
+        Files.writeString(file, "{ not json", StandardCharsets.UTF_8);
+        ProjectEditor editor = ProjectEditors.open(page, file); // never validates: not JSON
+        assertEquals(null, editor.shownSection(), "nothing to show in a file that is not JSON");
+        Files.writeString(file, good, StandardCharsets.UTF_8);
+        editor.setExternalChangePrompt(p -> true);
+        assertTrue(editor.checkExternalChange());
+        assertTrue(editor.model().section("drive_shaft") != null);
+        assertEquals("drive_shaft", editor.shownSection(), "the section page shows the reloaded sections");
     }
 
     @Test
