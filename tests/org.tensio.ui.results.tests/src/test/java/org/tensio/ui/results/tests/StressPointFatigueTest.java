@@ -9,11 +9,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.file.Path;
 import java.util.List;
 
-import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableItem;
-import org.eclipse.swt.widgets.Tree;
-import org.eclipse.swt.widgets.TreeItem;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.tensio.engine.checks.CheckResult;
@@ -63,20 +60,8 @@ class StressPointFatigueTest {
     void fatigueResultSelectedInTheTreeShowsTheCheckNumbers() throws Exception {
         Path demo = WorkbenchFixture.demo();
         ResultsView results = ResultsView.showIn(wb.page, demo);
-        StressPointView stress = (StressPointView) wb.page.showView(StressPointView.ID);
-        stress.setPinned(false);
-        wb.waitForResults(results, demo);
-        results.expandAll();
-        wb.page.activate(results);
-
-        Tree tree = wb.tree(results);
-        TreeItem station = ResultsViewTest.find(tree.getItem(0).getItems(), STATION);
-        TreeItem point = ResultsViewTest.find(ResultsViewTest.find(ResultsViewTest.find(station.getItems(), "running")
-                .getItems(), "fatigueGoodman").getItems(), "C45_QT");
-        tree.setSelection(point);
-        org.eclipse.swt.widgets.Event click = new org.eclipse.swt.widgets.Event();
-        click.item = point;
-        tree.notifyListeners(SWT.Selection, click);
+        StressPointView stress = wb.resultsWithStressView(results, demo);
+        wb.click(results, STATION, "running", "fatigueGoodman", "C45_QT");
 
         JsonObject check = checkResult(demo, "running", "fatigueGoodman");
         double x = check.getAsJsonObject("point").get("x").getAsDouble();

@@ -11,7 +11,6 @@ import java.util.Map;
 
 import org.eclipse.core.commands.Command;
 import org.eclipse.core.commands.State;
-import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.Tree;
 import org.eclipse.swt.widgets.TreeItem;
@@ -59,21 +58,10 @@ class StressPointViewTest {
     void governingPointSelectedInTheTreeShowsTheCommandLineNumbers() throws Exception {
         Path demo = WorkbenchFixture.demo();
         ResultsView results = ResultsView.showIn(wb.page, demo);
-        StressPointView stress = (StressPointView) wb.page.showView(StressPointView.ID);
-        stress.setPinned(false);
-        wb.waitForResults(results, demo);
-        results.expandAll();
-        wb.page.activate(results);
-
+        StressPointView stress = wb.resultsWithStressView(results, demo);
         // click the governing point of the project: platform beam, ULS, maxShear, S355
-        Tree tree = wb.tree(results);
-        TreeItem point = ResultsViewTest.find(ResultsViewTest.find(ResultsViewTest.find(
-                ResultsViewTest.find(tree.getItem(0).getItems(), STATION).getItems(), CASE).getItems(), "maxShear")
-                .getItems(), "S355");
-        tree.setSelection(point);
-        org.eclipse.swt.widgets.Event click = new org.eclipse.swt.widgets.Event();
-        click.item = point;
-        tree.notifyListeners(SWT.Selection, click);
+        TreeItem point = wb.click(results, STATION, CASE, "maxShear", "S355");
+        Tree tree = point.getParent();
 
         UiConditions.waitUntil(wb.display, WorkbenchFixture.TIMEOUT, "the stress-point view to show the point",
                 () -> stress.report() != null && STATION.equals(stress.report().stress().station())

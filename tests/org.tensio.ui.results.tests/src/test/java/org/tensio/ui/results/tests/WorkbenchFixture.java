@@ -9,7 +9,9 @@ import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.Event;
 import org.eclipse.swt.widgets.Tree;
 import org.eclipse.swt.widgets.TreeItem;
 import org.eclipse.ui.IWorkbench;
@@ -18,6 +20,7 @@ import org.eclipse.ui.IWorkbenchWindow;
 import org.eclipse.ui.PlatformUI;
 import org.tensio.ui.results.model.NodeKind;
 import org.tensio.ui.results.model.ResultNode;
+import org.tensio.ui.results.stress.StressPointView;
 import org.tensio.ui.results.views.ResultsView;
 import org.tensio.ui.testsupport.UiConditions;
 
@@ -56,6 +59,42 @@ final class WorkbenchFixture {
         UiConditions.waitUntil(display, TIMEOUT, "the results of " + file,
                 () -> view.input() != null && view.input().file().map(file::equals).orElse(false)
                         && (view.input().root() != null || view.input().failed()));
+    }
+
+    /**
+     * Opens {@code file} in the results view and the stress-point view (not pinned), waits for the check, expands
+     * the tree and activates the results view.
+     *
+     * @return the stress-point view
+     */
+    StressPointView resultsWithStressView(ResultsView results, Path file)
+            throws Exception {
+        StressPointView stress = (StressPointView) page
+                .showView(StressPointView.ID);
+        stress.setPinned(false);
+        waitForResults(results, file);
+        results.expandAll();
+        page.activate(results);
+        return stress;
+    }
+
+    /**
+     * Selects the item at {@code path} below the project node as a user's click does (selection and the
+     * selection event).
+     *
+     * @return the item
+     */
+    TreeItem click(ResultsView view, String... path) {
+        Tree tree = tree(view);
+        TreeItem item = tree.getItem(0);
+        for (String name : path) {
+            item = ResultsViewTest.find(item.getItems(), name);
+        }
+        tree.setSelection(item);
+        Event click = new Event();
+        click.item = item;
+        tree.notifyListeners(SWT.Selection, click);
+        return item;
     }
 
     /** @return every point node of the tree in project order */
