@@ -124,7 +124,7 @@ public final class FatigueCheckOp {
                 continue;
             }
             at.i = i;
-            rules.evaluate(at, rules.notchAt(f.x(i), f.y(i), surface[i]), a, sm, smax, d);
+            rules.evaluate(at, rules.notchAt(f.x(i), f.y(i), surface[i]), Double.NaN, a, sm, smax, d);
             for (int j = 0; j < k; j++) {
                 double u = d[j] / cap[j];
                 if (u > bestU[j]) {
@@ -143,8 +143,9 @@ public final class FatigueCheckOp {
                 continue;
             }
             at.i = i;
-            out.add(rules.result(j, at, f.point(i), surface[i], f.singular(i), bestA[j], bestM[j], bestMax[j],
-                    bestD[j]));
+            double[] peak = rules.peak(at, rules.notchAt(f.x(i), f.y(i), surface[i]));
+            out.add(rules.result(j, f.point(i), surface[i], f.singular(i), bestA[j], bestM[j], bestMax[j], bestD[j],
+                    peak));
         }
     }
 

@@ -7,6 +7,7 @@ import java.util.Map;
 
 import org.tensio.engine.fatigue.FatigueMaterial;
 import org.tensio.engine.fatigue.FatigueStation;
+import org.tensio.engine.fatigue.NotchFactors;
 import org.tensio.engine.fem.FiniteElementSolution;
 import org.tensio.engine.geometry.Point2;
 import org.tensio.engine.loads.InternalForces;
@@ -171,9 +172,11 @@ public final class FatiguePointOp {
                     k -> new FatigueRules(project, fs, section, props, historyId, fm));
             int k = r.criteria().size();
             double[] a = new double[k], sm = new double[k], smax = new double[k], d = new double[k];
-            r.evaluate(units, r.notchAt(at.x(), at.y(), onSurface), a, sm, smax, d);
+            NotchFactors nf = r.notchAt(at.x(), at.y(), onSurface);
+            double[] peak = r.peak(units, nf); // the same for every criterion of the history
+            r.evaluate(units, nf, peak[0], a, sm, smax, d);
             for (int j = 0; j < k; j++) {
-                out.add(r.result(j, units, at, onSurface, singular, a[j], sm[j], smax[j], d[j]));
+                out.add(r.result(j, at, onSurface, singular, a[j], sm[j], smax[j], d[j], peak));
             }
         }
         return new Result(stationId, at, units.material, onSurface, dist, out, notes);

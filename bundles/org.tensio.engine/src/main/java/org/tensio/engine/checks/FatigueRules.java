@@ -138,23 +138,26 @@ final class FatigueRules {
      *
      * @param at     the point's unit stresses
      * @param nf     the notch factors at the point ({@link #notchAt})
+     * @param peak   σmax' at the point when already known ({@link #peak}), else NaN (computed when a criterion
+     *               needs it)
      * @param a      receives per criterion the alternating stress it uses (σa' with the axial load factor for the
      *               fatigue lines, of the actual stresses for the yield checks)
      * @param sm     receives σm' (the same for every criterion)
      * @param smax   receives σmax' for the first-cycle yield check, NaN for the others
      * @param demand receives each criterion's demand
      */
-    void evaluate(UnitStresses at, NotchFactors nf, double[] a, double[] sm, double[] smax, double[] demand) {
+    void evaluate(UnitStresses at, NotchFactors nf, double peak, double[] a, double[] sm, double[] smax,
+            double[] demand) {
         mean.fill(at, nf, 1, m);
         cos.fill(at, nf, FatigueCheckOp.AXIAL_LOAD_FACTOR, c);
         sin.fill(at, nf, FatigueCheckOp.AXIAL_LOAD_FACTOR, s);
-        double sa = CycleStress.alternating(c, s), mn = CycleStress.mean(m), peak = Double.NaN, saY = sa;
+        double sa = CycleStress.alternating(c, s), mn = CycleStress.mean(m), saY = sa;
         if (yieldPeak || yieldSum) {
             // the yield checks take the actual stresses: no axial load factor
             cos.fill(at, nf, 1, cy);
             sin.fill(at, nf, 1, sy3);
             saY = CycleStress.alternating(cy, sy3);
-            if (yieldPeak) {
+            if (yieldPeak && Double.isNaN(peak)) {
                 peak = CycleStress.peak(m, cy, sy3)[0];
             }
         }
@@ -173,38 +176,50 @@ final class FatigueRules {
     }
 
     /**
-     * @param j        the criterion's index
-     * @param at       the point's unit stresses
-     * @param point    the point, section frame
-     * @param onSurface whether the point lies on the section's boundary
-     * @param singular whether it lies near a sharp re-entrant corner
-     * @param a        the criterion's alternating stress at the point ({@link #evaluate})
-     * @param sm       σm' at the point
-     * @param smax     σmax' from {@link #evaluate}, or NaN (then the peak of the actual stresses is reported)
-     * @param demand   the criterion's demand at the point
-     * @return the result: utilisation demand / capacity, the stress state at the cycle's peak, the fatigue detail
+     * The peak of the cycle at a point, of the actual stresses (no axial load factor) with the notch factors: the
+     * same for every criterion of this history at the point, so computed once per point.
+     *
+     * @param at the point's unit stresses
+     * @param nf the notch factors at the point ({@link #notchAt})
+     * @return {σmax', σ, τzx, τzy at the peak}, stress unit
      */
-    CheckResult result(int j, UnitStresses at, Point2 point, boolean onSurface, boolean singular, double a, double sm,
-            double smax, double demand) {
-        FatigueCriterion cr = criteria.get(j);
-        NotchFactors nf = notchAt(point.x(), point.y(), onSurface);
+    double[] peak(UnitStresses at, NotchFactors nf) {
         mean.fill(at, nf, 1, m);
         cos.fill(at, nf, 1, cy);
         sin.fill(at, nf, 1, sy3);
         double[] pk = CycleStress.peak(m, cy, sy3);
         double[] state = CycleStress.state(m, cy, sy3, pk[1]);
-        double peak = Double.isNaN(smax) ? pk[0] : smax;
+        return new double[] {pk[0], state[0], state[1], state[2]};
+    }
+
+    /**
+     * @param j         the criterion's index
+     * @param point     the point, section frame
+     * @param onSurface whether the point lies on the section's boundary
+     * @param singular  whether it lies near a sharp re-entrant corner
+     * @param a         the criterion's alternating stress at the point ({@link #evaluate})
+     * @param sm        σm' at the point
+     * @param smax      σmax' from {@link #evaluate}, or NaN (then the peak of the actual stresses is reported)
+     * @param demand    the criterion's demand at the point
+     * @param peak      {@link #peak} at the point
+     * @return the result: utilisation demand / capacity, the stress state at the cycle's peak, the fatigue detail
+     */
+    CheckResult result(int j, Point2 point, boolean onSurface, boolean singular, double a, double sm, double smax,
+            double demand, double[] peak) {
+        FatigueCriterion cr = criteria.get(j);
+        NotchFactors nf = notchAt(point.x(), point.y(), onSurface);
+        double peakValue = Double.isNaN(smax) ? peak[0] : smax;
         double capacity = capacity(j);
         if (minimumText[j] == null) {
             double[] d = {Double.NaN};
             minimumText[j] = minimum(cr, d);
             minimumDiameter[j] = d[0];
         }
-        FatigueDetail detail = new FatigueDetail(historyId, history.describe(), cr, criteria, a, sm, peak,
+        FatigueDetail detail = new FatigueDetail(historyId, history.describe(), cr, criteria, a, sm, peakValue,
                 capacity / demand, endurance, sut, sy, nf, notchText(nf, point.x(), point.y(), onSurface),
                 minimumDiameter[j], minimumText[j]);
         return new CheckResult(station.station(), historyId, cr.name(), material.material(), demand / capacity, demand,
-                capacity, point, state[0], state[1], state[2], singular, detail);
+                capacity, point, peak[1], peak[2], peak[3], singular, detail);
     }
 
     /** The forces of one phase split into N only and the rest. */
