@@ -22,7 +22,7 @@ import org.tensio.ui.results.model.ResultsText;
  * The fatigue part of the stress-point view: a summary line (on the surface or not, the notch factors Kf, Kfs,
  * Kf,axial that act at the point and which notches give them, Se with its factors) and a table with one row per
  * load history and fatigue criterion — σa′, σm′, σmax′, Se, the factor of safety n and the utilisation 1/n — with
- * the governing row selected. Hidden (excluded from the layout) when the station has no fatigue check.
+ * the row clicked in the results tree selected, else the governing row. Hidden (excluded from the layout) when the station has no fatigue check.
  */
 final class FatigueTable {
 
@@ -57,8 +57,12 @@ final class FatigueTable {
         return table;
     }
 
-    /** @return true when something is shown (the view lays the two widgets out only then) */
-    boolean show(PointReport r) {
+    /**
+     * @param r      the report, or null
+     * @param picked {history, criterion} of the row to select, or null for the governing row
+     * @return true when something is shown (the view lays the two widgets out only then)
+     */
+    boolean show(PointReport r, String[] picked) {
         if (r == null || r.fatigue() == null && r.fatigueProblem() == null) {
             table.removeAll();
             summary.setText(""); //$NON-NLS-1$
@@ -89,7 +93,8 @@ final class FatigueTable {
         int selected = -1;
         for (CheckResult c : rows) {
             FatigueDetail d = c.fatigue();
-            if (c == governing) {
+            if (picked != null ? c.caseId().equals(picked[0]) && c.criterion().equals(picked[1])
+                    : c == governing) {
                 selected = texts.size();
             }
             texts.add(new String[] { d.history(), c.criterion(), ResultsText.number(d.sigmaA()),
@@ -108,7 +113,11 @@ final class FatigueTable {
                 }
             }
         }
+        if (selected < 0 && picked != null) { // the clicked result is not among this point's: the governing one
+            selected = rows.indexOf(governing);
+        }
         table.setSelection(selected);
+        table.showSelection();
         return true;
     }
 

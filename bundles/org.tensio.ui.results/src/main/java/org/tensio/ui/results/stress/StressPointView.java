@@ -31,9 +31,11 @@ import org.eclipse.ui.IWorkbenchPartReference;
 import org.eclipse.ui.commands.ICommandService;
 import org.eclipse.ui.handlers.RegistryToggleState;
 import org.eclipse.ui.part.ViewPart;
+import org.tensio.engine.checks.CheckResult;
 import org.tensio.engine.service.SectionAnalysisService;
 import org.tensio.engine.stress.PointStress;
 import org.tensio.ui.results.model.ResultsText;
+import org.tensio.ui.results.views.ResultsView;
 import org.tensio.ui.selection.SectionPoint;
 import org.tensio.ui.selection.SectionPointerSource;
 import org.tensio.ui.services.AnalysisServiceTracker;
@@ -62,7 +64,8 @@ public final class StressPointView extends ViewPart {
 
     private final PreparedSections sections = new PreparedSections();
     private final Consumer<SectionPoint> pointerListener = p -> {
-        if (p != null) {
+        if (p != null && !pinned) {
+            picked = null;
             show(p);
         }
     };
@@ -95,6 +98,8 @@ public final class StressPointView extends ViewPart {
     private SectionPointerSource source;
     private boolean pinned;
     private SectionPoint current;
+    /** The fatigue result clicked in the results tree ({history, criterion}), or null: its row is selected. */
+    private String[] picked;
     private PointReport report;
     private Job preparing;
 
@@ -232,19 +237,19 @@ public final class StressPointView extends ViewPart {
             if (r == null) {
                 report = null;
                 tables.clear();
-                showFatigue(fatigue.show(null));
+                showFatigue(fatigue.show(null, null));
                 header.setText(NLS.bind(Messages.StressPointView_noStation, point.sectionId()));
             } else {
                 report = r;
                 tables.show(r);
-                showFatigue(fatigue.show(r));
+                showFatigue(fatigue.show(r, picked));
                 updateHeader();
                 warnings.setText(String.join("; ", r.warnings())); //$NON-NLS-1$
             }
         } catch (IllegalArgumentException e) {
             report = null;
             tables.clear();
-            showFatigue(fatigue.show(null));
+            showFatigue(fatigue.show(null, null));
             header.setText(NLS.bind(Messages.StressPointView_outside, e.getMessage()));
             warnings.setText(""); //$NON-NLS-1$
         }
@@ -285,7 +290,7 @@ public final class StressPointView extends ViewPart {
                 if (message != null) {
                     report = null;
                     tables.clear();
-                    showFatigue(fatigue.show(null));
+                    showFatigue(fatigue.show(null, null));
                     header.setText(message);
                     drawing.redraw();
                 } else {
@@ -314,8 +319,25 @@ public final class StressPointView extends ViewPart {
             return;
         }
         if (s.getFirstElement() instanceof SectionPoint p) {
+            if (!pinned) {
+                picked = pickedFatigue(part);
+            }
             show(p);
         }
+    }
+
+    /**
+     * @return {history, criterion} of the fatigue result selected in {@code part} when it is the results view
+     *         (the selection contract carries no load history), else null
+     */
+    private static String[] pickedFatigue(IWorkbenchPart part) {
+        if (part instanceof ResultsView results && results.selectedNodes().size() == 1) {
+            CheckResult r = results.selectedNodes().get(0).governing();
+            if (r != null && r.isFatigue()) {
+                return new String[] { r.caseId(), r.criterion() };
+            }
+        }
+        return null;
     }
 
     /** Listens to the pointer of {@code part} when it offers one (the last such part stays followed). */
