@@ -64,7 +64,7 @@ public final class StressPointView extends ViewPart {
 
     private final PreparedSections sections = new PreparedSections();
     private final Consumer<SectionPoint> pointerListener = p -> {
-        if (p != null && !pinned) {
+        if (p != null && !this.pinned) {
             picked = null;
             show(p);
         }
