@@ -59,7 +59,8 @@ final class FatigueTable {
 
     /**
      * @param r      the report, or null
-     * @param picked {history, criterion} of the row to select, or null for the governing row
+     * @param picked {history, criterion} of the row to select ({history, null}: that history's governing row), or
+     *               null for the governing row
      * @return true when something is shown (the view lays the two widgets out only then)
      */
     boolean show(PointReport r, String[] picked) {
@@ -90,6 +91,15 @@ final class FatigueTable {
                 + Messages.FatigueTable_caution);
         List<String[]> texts = new ArrayList<>();
         CheckResult governing = f.governing();
+        if (picked != null && picked[1] == null) {
+            CheckResult best = null;
+            for (CheckResult c : rows) {
+                if (c.caseId().equals(picked[0]) && (best == null || c.utilisation() > best.utilisation())) {
+                    best = c;
+                }
+            }
+            picked = best == null ? null : new String[] { best.caseId(), best.criterion() };
+        }
         int selected = -1;
         for (CheckResult c : rows) {
             FatigueDetail d = c.fatigue();

@@ -56,7 +56,7 @@ public final class PointEvaluator {
         }
         Point2 at = new Point2(point.x(), point.y());
         PointReport best = null;
-        if (point.caseId() != null) {
+        if (point.caseId() != null && !isHistoryOnly(prepared, station, point.caseId())) {
             best = report(prepared, stationId, point.caseId(), at, false);
         } else {
             for (String caseId : LoadCases.at(project, station, null)) {
@@ -71,6 +71,20 @@ public final class PointEvaluator {
             best = report(prepared, stationId, NO_CASE, at, false);
         }
         return best == null ? null : fatigue(prepared, stationId, at, best);
+    }
+
+    /**
+     * @return true when {@code id} names a fatigue load history of the station and no load case or combination
+     *         there (a part showing a fatigue quantity may pass its history as the point's case): the static case
+     *         is then chosen as for a point without a case
+     */
+    public static boolean isHistoryOnly(PreparedSection prepared, Station station, String id) {
+        if (prepared.fatigue() == null) {
+            return false;
+        }
+        var fs = prepared.fatigue().station(station.id());
+        return fs != null && fs.histories().containsKey(id)
+                && !LoadCases.at(prepared.project(), station, null).contains(id);
     }
 
     /** The case id shown for a station without load cases whose fatigue histories give its forces. */

@@ -64,8 +64,7 @@ public final class StressPointView extends ViewPart {
 
     private final PreparedSections sections = new PreparedSections();
     private final Consumer<SectionPoint> pointerListener = p -> {
-        if (p != null && !this.pinned) {
-            picked = null;
+        if (p != null) {
             show(p);
         }
     };
@@ -100,6 +99,8 @@ public final class StressPointView extends ViewPart {
     private SectionPoint current;
     /** The fatigue result clicked in the results tree ({history, criterion}), or null: its row is selected. */
     private String[] picked;
+    /** The point {@link #picked} was clicked for (it applies to that point only). */
+    private SectionPoint pickedFor;
     private PointReport report;
     private Job preparing;
 
@@ -242,7 +243,12 @@ public final class StressPointView extends ViewPart {
             } else {
                 report = r;
                 tables.show(r);
-                showFatigue(fatigue.show(r, picked));
+                String[] pick = point.equals(pickedFor) ? picked : null;
+                if (pick == null && point.caseId() != null && point.stationId() != null
+                        && PointEvaluator.isHistoryOnly(p, p.project().station(point.stationId()), point.caseId())) {
+                    pick = new String[] { point.caseId(), null }; // a history as the case: its governing row
+                }
+                showFatigue(fatigue.show(r, pick));
                 updateHeader();
                 warnings.setText(String.join("; ", r.warnings())); //$NON-NLS-1$
             }
@@ -321,6 +327,7 @@ public final class StressPointView extends ViewPart {
         if (s.getFirstElement() instanceof SectionPoint p) {
             if (!pinned) {
                 picked = pickedFatigue(part);
+                pickedFor = p;
             }
             show(p);
         }

@@ -144,6 +144,16 @@ class StressPointFatigueTest {
                 "half the lever arm, no Kf: " + inner.fatigue().sigmaA() + " vs " + d.sigmaA());
         assertTrue(stress.fatigueSummary().contains("inside"), stress.fatigueSummary());
 
+        // a load history passed as the point's case (a part showing a fatigue quantity): the static case is chosen,
+        // the fatigue row selected is that history's governing one
+        stress.show(new SectionPoint(demo, STATION, r.sectionId(), "start_up", x, y));
+        UiConditions.waitUntil(wb.display, WorkbenchFixture.TIMEOUT, "a history as the case",
+                () -> stress.report() != null && stress.report().stress().point().x() == x);
+        assertTrue(stress.report().caseChosen(), "start_up is no load case: the case is chosen");
+        CheckResult startUp = stress.report().fatigue().results().stream().filter(c -> c.caseId().equals("start_up"))
+                .max(java.util.Comparator.comparingDouble(CheckResult::utilisation)).orElseThrow();
+        assertEquals(stress.report().fatigue().results().indexOf(startUp), table.getSelectionIndex());
+
         // a station without a fatigue check: no fatigue part
         stress.show(new SectionPoint(demo, "drive_shaft_bearing", "drive_shaft", null, 0, -29));
         UiConditions.waitUntil(wb.display, WorkbenchFixture.TIMEOUT, "a static-only station",
