@@ -3,15 +3,14 @@ package org.tensio.engine.checks;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.tensio.engine.fatigue.FatigueData;
 import org.tensio.engine.fatigue.FatigueMaterial;
 import org.tensio.engine.fatigue.FatigueStation;
 import org.tensio.engine.fatigue.NotchFactors;
+import org.tensio.engine.fem.FiniteElementSolution;
 import org.tensio.engine.geometry.Point2;
 import org.tensio.engine.loads.InternalForces;
 import org.tensio.engine.mesh.Mesh;
 import org.tensio.engine.project.Project;
-import org.tensio.engine.project.Station;
 import org.tensio.engine.properties.SectionProperties;
 import org.tensio.engine.section.Section;
 import org.tensio.engine.service.SectionAnalysisService;
@@ -38,7 +37,11 @@ import org.tensio.engine.service.SectionAnalysisService;
  * also carries the minimum diameter ({@link MinimumDiameter#solve}, bending moment and torque amplitudes and
  * means of the cycle, the largest notch factors of the station, the notch radius scaled with the diameter).
  * <p>
- * Single use; {@link #results} computes. Not thread-safe.
+ * {@link #sampleUtilisation} gives the utilisation of one station and history at every sample instead of the
+ * governing one (for contours): the same sample loop, so its largest value is the governing result's utilisation.
+ * <p>
+ * {@link #results} and {@link #sampleUtilisation} compute on every call (the unit stress fields of the default mesh
+ * are kept between calls). Not thread-safe.
  *
  * @since 0.1
  */
@@ -69,52 +72,188 @@ public final class FatigueCheckOp {
     }
 
     /**
+     * The fatigue utilisation at every sample of a station's unit stress field for one load history: what
+     * {@link #results} evaluates before it keeps the governing sample of each criterion.
+     *
+     * @param station     the station id (one with a fatigue check)
+     * @param history     the load-history id
+     * @param field       the unit stress field whose samples (mesh nodes, see {@link UnitStressField}) were
+     *                    evaluated; sample i of {@code field} is entry i of {@link #utilisation()}
+     * @param utilisation per sample: the largest utilisation = demand / capacity = 1/n over the station's fatigue
+     *                    criteria ({@link org.tensio.engine.fatigue.FatigueCriterion}), dimensionless, with the
+     *                    notch factors of the notches that cover the sample applied (surface notches at the mesh's
+     *                    boundary nodes, located notches within their distance); NaN at a sample of a material
+     *                    without fatigue data (not checked for fatigue)
+     * @param notes       why samples are not evaluated (materials without fatigue data), empty when all are
+     * @since 0.1
+     */
+    public record SampleUtilisation(String station, String history, UnitStressField field, double[] utilisation,
+            List<String> notes) {
+
+        /**
+         * Copies the array and the notes (null: none).
+         *
+         * @throws IllegalArgumentException when the field is null or the array has not one entry per sample
+         */
+        public SampleUtilisation {
+            if (field == null || utilisation == null || utilisation.length != field.size()) {
+                throw new IllegalArgumentException("utilisation: one value per sample of the field needed, got "
+                        + (utilisation == null ? null : utilisation.length) + " for "
+                        + (field == null ? null : field.size()) + " samples");
+            }
+            utilisation = utilisation.clone();
+            notes = notes == null ? List.of() : List.copyOf(notes);
+        }
+
+        /** @return a copy of the per-sample utilisations (dimensionless, NaN where not evaluated) */
+        @Override
+        public double[] utilisation() {
+            return utilisation.clone();
+        }
+
+        /** @return the utilisation at sample {@code i} of {@link #field()}, dimensionless, NaN where not evaluated */
+        public double at(int i) {
+            return utilisation[i];
+        }
+
+        /**
+         * @return the largest utilisation over the evaluated samples (equal to the largest utilisation of this
+         *         station and history among {@link FatigueCheckOp#results} when the field is the default mesh's),
+         *         NaN when no sample is evaluated
+         */
+        public double max() {
+            double m = Double.NaN;
+            for (double u : utilisation) {
+                if (u > m || Double.isNaN(m) && !Double.isNaN(u)) {
+                    m = u;
+                }
+            }
+            return m;
+        }
+    }
+
+    /**
      * @param warnings receives notes (materials without fatigue data), may be null
      * @return the fatigue results in project order: stations in file order, histories in file order, materials in
      *         part order, criteria as listed
      */
     public List<CheckResult> results(List<String> warnings) {
         List<CheckResult> out = new ArrayList<>();
-        FatigueData fd = project.fatigue();
-        for (FatigueStation fs : fd.stations().values()) {
-            Station st = project.station(fs.station());
-            Section section = project.section(st.sectionId());
+        for (FatigueStation fs : project.fatigue().stations().values()) {
+            Section section = project.section(project.station(fs.station()).sectionId());
             SectionProperties props = engine.properties(section);
-            Mesh mesh = engine.solution(section).mesh();
             UnitStressField f = fields.of(section);
-            boolean[] surface = surfaceSamples(f, mesh);
-            List<String> mats = new ArrayList<>();
-            section.parts().forEach(p -> {
-                if (!mats.contains(p.material().name())) {
-                    mats.add(p.material().name());
-                }
-            });
+            boolean[] surface = surfaceSamples(f, engine.solution(section).mesh());
             for (String historyId : fs.histories().keySet()) {
-                for (String m : mats) {
-                    FatigueMaterial fm = fd.materials().get(m);
-                    if (fm == null) {
-                        if (warnings != null) {
-                            warnings.add("station '" + st.id() + "': material '" + m + "' has no fatigue data: its"
-                                    + " points are not checked for fatigue");
-                        }
-                        continue;
-                    }
-                    evaluate(new FatigueRules(project, fs, section, props, historyId, fm), f, surface, out);
+                for (FatigueRules rules : rules(fs, section, props, historyId, warnings)) {
+                    governing(rules, f, surface, out);
                 }
             }
         }
         return out;
     }
 
-    /** The governing sample of each criterion of {@code rules} among the samples of its material. */
-    private static void evaluate(FatigueRules rules, UnitStressField f, boolean[] surface, List<CheckResult> out) {
+    /**
+     * The fatigue utilisation at every sample of the station's section on the default mesh (the samples
+     * {@link #results} evaluates, so that the largest equals the governing utilisation of that station and history).
+     *
+     * @param stationId a station with a fatigue check ({@link Project#fatigue()})
+     * @param historyId one of its load histories
+     * @return the per-sample utilisations, dimensionless
+     * @throws IllegalArgumentException naming the station or history when the station is unknown, has no fatigue
+     *                                  check, or has no such history
+     * @since 0.1
+     */
+    public SampleUtilisation sampleUtilisation(String stationId, String historyId) {
+        return sampleUtilisation(stationId, historyId, null);
+    }
+
+    /**
+     * As {@link #sampleUtilisation(String, String)} on the nodes of a given finite-element solution of the
+     * station's section (e.g. a mesh denser or coarser than the default; its nodes are the samples and its boundary
+     * nodes the surface). On another mesh than the default the values are those of that mesh, not the check's.
+     *
+     * @param fe the section's solution ({@code SectionAnalysisService.solution(section, options, monitor)}), or
+     *           null for the default mesh's
+     * @since 0.1
+     */
+    public SampleUtilisation sampleUtilisation(String stationId, String historyId, FiniteElementSolution fe) {
+        FatigueStation fs = project.fatigue().stations().get(stationId);
+        if (fs == null) {
+            throw new IllegalArgumentException("stationId: station '" + stationId + "' has no fatigue check (have "
+                    + project.fatigue().stations().keySet() + ")");
+        }
+        if (!fs.histories().containsKey(historyId)) {
+            throw new IllegalArgumentException("historyId: station '" + stationId + "' has no load history '"
+                    + historyId + "' (have " + fs.histories().keySet() + ")");
+        }
+        Section section = project.section(project.station(stationId).sectionId());
+        SectionProperties props = engine.properties(section);
+        UnitStressField f = fe == null ? fields.of(section) : UnitStressField.of(section, props, fe);
+        boolean[] surface = surfaceSamples(f, (fe == null ? engine.solution(section) : fe).mesh());
+        double[] u = new double[f.size()];
+        java.util.Arrays.fill(u, Double.NaN);
+        List<String> notes = new ArrayList<>();
+        for (FatigueRules rules : rules(fs, section, props, historyId, notes)) {
+            sweep(rules, f, surface, (i, uj, a, sm, smax, d) -> {
+                double m = Double.NEGATIVE_INFINITY;
+                for (double v : uj) {
+                    if (v > m) {
+                        m = v;
+                    }
+                }
+                u[i] = m == Double.NEGATIVE_INFINITY ? Double.NaN : m;
+            });
+        }
+        return new SampleUtilisation(stationId, historyId, f, u, notes);
+    }
+
+    /**
+     * @return the rules of each material of {@code section} (part order) with fatigue data; a note per material
+     *         without to {@code warnings} (may be null)
+     */
+    private List<FatigueRules> rules(FatigueStation fs, Section section, SectionProperties props, String historyId,
+            List<String> warnings) {
+        List<String> mats = new ArrayList<>();
+        section.parts().forEach(p -> {
+            if (!mats.contains(p.material().name())) {
+                mats.add(p.material().name());
+            }
+        });
+        List<FatigueRules> out = new ArrayList<>();
+        for (String m : mats) {
+            FatigueMaterial fm = project.fatigue().materials().get(m);
+            if (fm == null) {
+                if (warnings != null) {
+                    warnings.add("station '" + fs.station() + "': material '" + m + "' has no fatigue data: its"
+                            + " points are not checked for fatigue");
+                }
+                continue;
+            }
+            out.add(new FatigueRules(project, fs, section, props, historyId, fm));
+        }
+        return out;
+    }
+
+    /** Receives the evaluation of every criterion at one sample (arrays indexed by criterion, reused). */
+    @FunctionalInterface
+    private interface SampleSink {
+        /**
+         * @param i    the sample
+         * @param u    utilisation = demand / capacity per criterion
+         * @param a    the alternating stress each criterion uses
+         * @param sm   σm'
+         * @param smax σmax' (first-cycle yield) or NaN
+         * @param d    the demand per criterion
+         */
+        void accept(int i, double[] u, double[] a, double[] sm, double[] smax, double[] d);
+    }
+
+    /** Evaluates {@code rules} at every sample of its material, in node order, handing each to {@code sink}. */
+    private static void sweep(FatigueRules rules, UnitStressField f, boolean[] surface, SampleSink sink) {
         int k = rules.criteria().size();
-        int[] best = new int[k];
-        double[] bestU = new double[k], bestA = new double[k], bestM = new double[k], bestMax = new double[k],
-                bestD = new double[k];
-        java.util.Arrays.fill(best, -1);
-        java.util.Arrays.fill(bestU, Double.NEGATIVE_INFINITY);
-        double[] a = new double[k], sm = new double[k], smax = new double[k], d = new double[k], cap = new double[k];
+        double[] a = new double[k], sm = new double[k], smax = new double[k], d = new double[k], cap = new double[k],
+                u = new double[k];
         for (int j = 0; j < k; j++) {
             cap[j] = rules.capacity(j);
         }
@@ -126,9 +265,24 @@ public final class FatigueCheckOp {
             at.i = i;
             rules.evaluate(at, rules.notchAt(f.x(i), f.y(i), surface[i]), Double.NaN, a, sm, smax, d);
             for (int j = 0; j < k; j++) {
-                double u = d[j] / cap[j];
-                if (u > bestU[j]) {
-                    bestU[j] = u;
+                u[j] = d[j] / cap[j];
+            }
+            sink.accept(i, u, a, sm, smax, d);
+        }
+    }
+
+    /** The governing sample of each criterion of {@code rules} among the samples of its material. */
+    private static void governing(FatigueRules rules, UnitStressField f, boolean[] surface, List<CheckResult> out) {
+        int k = rules.criteria().size();
+        int[] best = new int[k];
+        double[] bestU = new double[k], bestA = new double[k], bestM = new double[k], bestMax = new double[k],
+                bestD = new double[k];
+        java.util.Arrays.fill(best, -1);
+        java.util.Arrays.fill(bestU, Double.NEGATIVE_INFINITY);
+        sweep(rules, f, surface, (i, u, a, sm, smax, d) -> {
+            for (int j = 0; j < k; j++) {
+                if (u[j] > bestU[j]) {
+                    bestU[j] = u[j];
                     best[j] = i;
                     bestA[j] = a[j];
                     bestM[j] = sm[j];
@@ -136,7 +290,8 @@ public final class FatigueCheckOp {
                     bestD[j] = d[j];
                 }
             }
-        }
+        });
+        Sample at = new Sample(f);
         for (int j = 0; j < k; j++) {
             int i = best[j];
             if (i < 0) {

@@ -54,7 +54,7 @@ public enum ColourScale {
         } else {
             lo = 0;
             hi = max > 0 ? max : 1;
-            if (q == Quantity.UTILISATION) {
+            if (q.isUtilisation()) {
                 hi = Math.min(hi, 1);
             }
         }
@@ -69,7 +69,7 @@ public enum ColourScale {
      *         BANDS_COUNT for utilisation above 1
      */
     public static int bandOf(Quantity q, double value, double[] edges) {
-        if (q == Quantity.UTILISATION && value > 1) {
+        if (q.isUtilisation() && value > 1) {
             return BANDS_COUNT;
         }
         double t = (value - edges[0]) / (edges[BANDS_COUNT] - edges[0]);

@@ -3,6 +3,7 @@ package org.tensio.ui.editor.overlay;
 import java.util.HashMap;
 import java.util.Map;
 
+import org.tensio.engine.checks.FatigueCheckOp;
 import org.tensio.engine.checks.UnitStressField;
 import org.tensio.engine.fem.FiniteElementSolution;
 import org.tensio.engine.linalg.ProgressMonitor;
@@ -19,7 +20,11 @@ import org.tensio.engine.service.SectionAnalysisService;
 /**
  * Computes a contour with the engine service: properties and finite-element solution of the section, its unit
  * stress fields at every mesh node ({@link UnitStressField}) and the forces of the station's case or
- * combination ({@link Project#forces}). Runs off the UI thread; cancellable through the monitor.
+ * combination ({@link Project#forces}); the utilisation over the material's built-in and contributed criteria
+ * ({@link StaticUtilisation}, as the engine's check); for {@link Quantity#FATIGUE_UTILISATION} the fatigue
+ * utilisation of the station's load history at every node ({@link FatigueCheckOp#sampleUtilisation}: the check's
+ * own numbers, so on the default mesh the contour's maximum is the check's governing fatigue utilisation). Runs
+ * off the UI thread; cancellable through the monitor.
  */
 public final class ContourOp {
 
@@ -28,7 +33,8 @@ public final class ContourOp {
 
     /**
      * @throws java.util.concurrent.CancellationException when {@code monitor} cancels
-     * @throws IllegalArgumentException                   naming the station, case or section when unknown
+     * @throws IllegalArgumentException                   naming the station, case (load history) or section when
+     *                                                    unknown, or a criterion not contributed to the engine
      */
     public static ContourResult compute(SectionAnalysisService service, ContourRequest r, ProgressMonitor monitor) {
         Project project = r.project();
@@ -56,12 +62,17 @@ public final class ContourOp {
         double min = Double.NaN;
         double max = Double.NaN;
         if (r.stationId() != null && r.caseId() != null) {
-            InternalForces f = project.forces(r.stationId(), r.caseId());
-            UnitStressField field = UnitStressField.of(section, props, fe);
-            double[] s = new double[field.size()];
-            double[] zx = new double[field.size()];
-            double[] zy = new double[field.size()];
-            field.evaluate(f, s, zx, zy);
+            UnitStressField field;
+            double[] sampleValues;
+            if (r.quantity().fatigue()) {
+                FatigueCheckOp.SampleUtilisation u = new FatigueCheckOp(project, service)
+                        .sampleUtilisation(r.stationId(), r.caseId(), fe);
+                field = u.field();
+                sampleValues = u.utilisation();
+            } else {
+                field = UnitStressField.of(section, props, fe);
+                sampleValues = stresses(project, service, r, field);
+            }
             Map<String, Integer> sample = new HashMap<>();
             for (int i = 0; i < field.size(); i++) {
                 sample.put(field.node(i) + "/" + field.material(i), i); //$NON-NLS-1$
@@ -73,8 +84,7 @@ public final class ContourOp {
                 String material = section.parts().get(mesh.part(e)).material().name();
                 for (int k = 0; k < 6; k++) {
                     Integer i = sample.get(elements[6 * e + k] + "/" + material); //$NON-NLS-1$
-                    double v = i == null ? Double.NaN
-                            : value(r.quantity(), s[i], zx[i], zy[i], project.limits().get(material));
+                    double v = i == null ? Double.NaN : sampleValues[i];
                     values[6 * e + k] = v;
                     if (Double.isFinite(v)) {
                         min = Math.min(min, v);
@@ -91,22 +101,25 @@ public final class ContourOp {
                 props.shearCentre() != null ? props.shearCentre() : fe.shearCentre(), project.units().stressUnit());
     }
 
-    /** @return the quantity at a point; utilisation is NaN for a material without limits */
-    static double value(Quantity q, double sigma, double tzx, double tzy, MaterialLimits limits) {
-        return switch (q) {
-            case SIGMA_Z -> sigma;
-            case TAU -> Math.hypot(tzx, tzy);
-            case VON_MISES -> MaterialLimits.demand(Criterion.vonMises, sigma, tzx, tzy);
-            case UTILISATION -> {
-                if (limits == null) {
-                    yield Double.NaN;
-                }
-                double u = 0;
-                for (Criterion c : limits.criteria()) {
-                    u = Math.max(u, MaterialLimits.demand(c, sigma, tzx, tzy) / limits.capacity(c));
-                }
-                yield u;
-            }
-        };
+    /** @return per sample of {@code field} the stress quantity or static utilisation of the request's case */
+    private static double[] stresses(Project project, SectionAnalysisService service, ContourRequest r,
+            UnitStressField field) {
+        InternalForces f = project.forces(r.stationId(), r.caseId());
+        double[] s = new double[field.size()];
+        double[] zx = new double[field.size()];
+        double[] zy = new double[field.size()];
+        field.evaluate(f, s, zx, zy);
+        StaticUtilisation utilisation = new StaticUtilisation(project, service);
+        double[] out = new double[field.size()];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = switch (r.quantity()) {
+            case SIGMA_Z -> s[i];
+            case TAU -> Math.hypot(zx[i], zy[i]);
+            case VON_MISES -> MaterialLimits.demand(Criterion.vonMises, s[i], zx[i], zy[i]);
+            case UTILISATION -> utilisation.at(field.material(i), s[i], zx[i], zy[i]);
+            case FATIGUE_UTILISATION -> throw new IllegalStateException("fatigue utilisation is not a stress of a case");
+            };
+        }
+        return out;
     }
 }

@@ -44,7 +44,8 @@ public final class EditorPreferencePage extends FieldEditorPreferencePage implem
                 new String[][] { { Messages.Preferences_sigma, Quantity.SIGMA_Z.name() },
                         { Messages.Preferences_tau, Quantity.TAU.name() },
                         { Messages.Preferences_vonMises, Quantity.VON_MISES.name() },
-                        { Messages.Preferences_utilisation, Quantity.UTILISATION.name() } },
+                        { Messages.Preferences_utilisation, Quantity.UTILISATION.name() },
+                        { Messages.Preferences_fatigueUtilisation, Quantity.FATIGUE_UTILISATION.name() } },
                 getFieldEditorParent()));
         addField(new ComboFieldEditor(EditorPreferences.COLOUR_SCALE, Messages.Preferences_scale,
                 new String[][] { { Messages.Preferences_scaleBands, ColourScale.BANDS.name() },

@@ -17,6 +17,7 @@ final class Messages extends NLS {
     public static String Preferences_tau;
     public static String Preferences_vonMises;
     public static String Preferences_utilisation;
+    public static String Preferences_fatigueUtilisation;
     public static String Preferences_scale;
     public static String Preferences_scaleBands;
     public static String Preferences_scaleGrey;

@@ -14,6 +14,7 @@ final class Labels {
         case TAU -> Messages.Quantity_tau;
         case VON_MISES -> Messages.Quantity_vonMises;
         case UTILISATION -> Messages.Quantity_utilisation;
+        case FATIGUE_UTILISATION -> Messages.Quantity_fatigueUtilisation;
         };
     }
 }

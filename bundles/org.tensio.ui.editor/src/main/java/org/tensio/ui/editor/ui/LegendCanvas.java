@@ -13,13 +13,18 @@ import org.tensio.ui.editor.parts.Inks;
 
 /**
  * The contour legend beside the drawing: the quantity and its unit, the case, one box per band from the
- * highest down with the band's edge values, the extreme values, and the caution. Stateless apart from the
- * {@link Legend} it shows.
+ * highest down with the band's edge values, the extreme values, the quantity's own caution (fatigue) and the
+ * general caution. Stateless apart from the {@link Legend} it shows.
  */
 final class LegendCanvas extends Canvas {
 
-    /** What the legend shows. Immutable. */
-    record Legend(String title, String caseLabel, double[] edges, List<RGB> bands, RGB overLimit, String minMax) {
+    /**
+     * What the legend shows. Immutable.
+     *
+     * @param caution the quantity's own caution shown above the general one, or null
+     */
+    record Legend(String title, String caseLabel, double[] edges, List<RGB> bands, RGB overLimit, String minMax,
+            String caution) {
     }
 
     private static final int BOX_W = 26;
@@ -50,6 +55,23 @@ final class LegendCanvas extends Canvas {
 
     Legend legend() {
         return legend;
+    }
+
+    /** @return the texts shown: title, case line, extreme values and cautions, or the message and the caution */
+    List<String> texts() {
+        List<String> out = new java.util.ArrayList<>();
+        if (legend == null) {
+            out.add(message);
+        } else {
+            out.add(legend.title());
+            out.add(legend.caseLabel());
+            out.add(legend.minMax());
+            if (legend.caution() != null) {
+                out.add(legend.caution());
+            }
+        }
+        out.add(Messages.Caution);
+        return out;
     }
 
     @Override
@@ -91,6 +113,9 @@ final class LegendCanvas extends Canvas {
             }
             y += 10;
             y = wrap(gc, legend.minMax(), MARGIN, y, width - 2 * MARGIN);
+            if (legend.caution() != null) {
+                y = wrap(gc, legend.caution(), MARGIN, y + 12, width - 2 * MARGIN);
+            }
         }
         y += 12;
         wrap(gc, Messages.Caution, MARGIN, y, width - 2 * MARGIN);

@@ -142,8 +142,12 @@ final class OverlayController {
     private void drawContour(OverlayFigure overlay, ContourResult r, ViewTransform t, Inks inks) {
         if (r == null || r.values() == null || !page.contourOn() || !Double.isFinite(r.max())) {
             overlay.setContour(new int[0], new int[0], new Color[0]);
-            if (r != null && r.values() == null && failure == null) {
-                page.legend().showMessage(Messages.Legend_noCase);
+            if (r != null && failure == null) {
+                if (r.values() == null) {
+                    page.legend().showMessage(noContour(r.request()));
+                } else if (!Double.isFinite(r.max())) {
+                    page.legend().showMessage(Messages.Legend_noValues);
+                }
             }
             return;
         }
@@ -186,17 +190,40 @@ final class OverlayController {
         }
         overlay.setContour(java.util.Arrays.copyOf(tri, 6 * count), java.util.Arrays.copyOf(bands, count), colours);
         DisplayUnits units = EditorPreferences.displayUnits();
-        double f = q == Quantity.UTILISATION ? 1 : units.stress(editor.model().lengthUnit(), editor.model().forceUnit());
+        double f = q.isUtilisation() ? 1 : units.stress(editor.model().lengthUnit(), editor.model().forceUnit());
         double[] shownEdges = edges.clone();
         for (int i = 0; i < shownEdges.length; i++) {
             shownEdges[i] *= f;
         }
-        String unit = q == Quantity.UTILISATION ? "–" : units.stressSymbol(r.stressUnit()); //$NON-NLS-1$
+        String unit = q.isUtilisation() ? "–" : units.stressSymbol(r.stressUnit()); //$NON-NLS-1$
         String title = NLS.bind(Messages.Legend_title, Labels.quantity(q), unit);
-        String caseLabel = NLS.bind(Messages.Legend_case, r.request().stationId(), r.request().caseId());
+        String caseLabel = NLS.bind(q.fatigue() ? Messages.Legend_history : Messages.Legend_case,
+                r.request().stationId(), r.request().caseId());
         String minMax = NLS.bind(Messages.Legend_minMax, Format.number(r.min() * f), Format.number(r.max() * f));
         page.legend().show(new LegendCanvas.Legend(title, caseLabel, shownEdges, rgbs,
-                q == Quantity.UTILISATION && r.max() > 1 ? overRgb : null, minMax));
+                q.isUtilisation() && r.max() > 1 ? overRgb : null, minMax, q.fatigue() ? Messages.FatigueCaution : null));
+    }
+
+    /** @return why a request without a case shows no contour */
+    private static String noContour(ContourRequest request) {
+        if (!request.quantity().fatigue()) {
+            return Messages.Legend_noCase;
+        }
+        Project project = request.project();
+        String station = request.stationId();
+        if (station == null || !project.stations().containsKey(station)
+                || project.fatigue().stations().containsKey(station)) {
+            return Messages.Legend_noHistory;
+        }
+        List<String> withFatigue = new ArrayList<>();
+        for (String id : project.fatigue().stations().keySet()) {
+            if (project.stations().containsKey(id)
+                    && project.stations().get(id).sectionId().equals(request.sectionId())) {
+                withFatigue.add(id);
+            }
+        }
+        return withFatigue.isEmpty() ? NLS.bind(Messages.Legend_noFatigueHere, station)
+                : NLS.bind(Messages.Legend_noFatigue, station, String.join(", ", withFatigue)); //$NON-NLS-1$
     }
 
     private static int[] meshEdges(ContourResult r, ViewTransform t) {

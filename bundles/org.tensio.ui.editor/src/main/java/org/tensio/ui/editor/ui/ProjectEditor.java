@@ -325,6 +325,19 @@ public final class ProjectEditor extends MultiPageEditorPart implements CommandS
         pages.section().selectQuantity(q);
     }
 
+    /**
+     * @return what the case chooser of the graphical page offers: the station's load cases and combinations, or for
+     *         the fatigue quantity the load histories of its fatigue check (none when it has none)
+     */
+    public List<String> caseChoices() {
+        return List.copyOf(pages.section().caseChoices());
+    }
+
+    /** @return the texts the contour legend shows (title, case line, extreme values, cautions; or its message) */
+    public List<String> legendTexts() {
+        return pages.section().legend().texts();
+    }
+
     /** @return the contour currently drawn, or null */
     public ContourResult contour() {
         return pages.section().overlays().shown();

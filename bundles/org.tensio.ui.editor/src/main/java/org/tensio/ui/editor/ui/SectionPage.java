@@ -29,6 +29,7 @@ import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Label;
+import org.tensio.engine.fatigue.FatigueStation;
 import org.tensio.engine.project.Project;
 import org.tensio.engine.project.Station;
 import org.tensio.ui.editor.figures.OverlayFigure;
@@ -64,6 +65,7 @@ final class SectionPage {
     private Combo sectionCombo;
     private Combo stationCombo;
     private Combo caseCombo;
+    private Label caseLabel;
     private Combo quantityCombo;
     private Button meshCheck;
     private Button axesCheck;
@@ -75,6 +77,10 @@ final class SectionPage {
     private OverlayController overlays;
     private List<String> stationIds = List.of();
     private List<String> caseIds = List.of();
+    /** whether the case chooser lists the load histories of the station's fatigue check (fatigue quantity) */
+    private boolean historiesListed;
+    /** the choice of the other kind (case while histories are listed, history otherwise), restored on return */
+    private String otherKindChoice;
 
     SectionPage(ProjectEditor editor, Inks inks) {
         this.editor = editor;
@@ -117,8 +123,9 @@ final class SectionPage {
         sectionCombo.addListener(SWT.Selection, e -> showSection(sectionCombo.getText()));
         new Label(bar, SWT.NONE).setText(Messages.SectionPage_station);
         stationCombo = new Combo(bar, SWT.READ_ONLY);
-        stationCombo.addListener(SWT.Selection, e -> stationChosen());
-        new Label(bar, SWT.NONE).setText(Messages.SectionPage_case);
+        stationCombo.addListener(SWT.Selection, e -> refreshCasesAndContour());
+        caseLabel = new Label(bar, SWT.NONE);
+        caseLabel.setText(Messages.SectionPage_case);
         caseCombo = new Combo(bar, SWT.READ_ONLY);
         caseCombo.addListener(SWT.Selection, e -> overlays.recompute());
         new Label(bar, SWT.NONE).setText(Messages.SectionPage_quantity);
@@ -127,7 +134,7 @@ final class SectionPage {
             quantityCombo.add(Labels.quantity(q));
         }
         quantityCombo.select(EditorPreferences.quantity().ordinal());
-        quantityCombo.addListener(SWT.Selection, e -> overlays.recompute());
+        quantityCombo.addListener(SWT.Selection, e -> refreshCasesAndContour());
         contourCheck = check(bar, Messages.SectionPage_contour, true);
         meshCheck = check(bar, Messages.SectionPage_mesh, false);
         axesCheck = check(bar, Messages.SectionPage_axes, true);
@@ -240,20 +247,39 @@ final class SectionPage {
         refreshCases(project);
     }
 
-    private void stationChosen() {
+    private void refreshCasesAndContour() {
         refreshCases(editor.project());
         overlays.recompute();
     }
 
+    /**
+     * Lists the station's load cases and combinations, or for the fatigue quantity the load histories of its
+     * fatigue check (none when it has no fatigue check: the legend says so), keeping the choice of each kind.
+     */
     private void refreshCases(Project project) {
+        boolean histories = quantity().fatigue();
         String keep = caseId();
+        if (histories != historiesListed) {
+            String other = otherKindChoice;
+            otherKindChoice = keep;
+            keep = other;
+            historiesListed = histories;
+            caseLabel.setText(histories ? Messages.SectionPage_history : Messages.SectionPage_case);
+        }
         caseCombo.removeAll();
         List<String> ids = new ArrayList<>();
         String station = stationId();
         if (station != null && project != null && project.stations().containsKey(station)) {
-            Station st = project.stations().get(station);
-            ids.addAll(st.cases().keySet());
-            ids.addAll(project.combinations().keySet());
+            if (histories) {
+                FatigueStation fs = project.fatigue().stations().get(station);
+                if (fs != null) {
+                    ids.addAll(fs.histories().keySet());
+                }
+            } else {
+                Station st = project.stations().get(station);
+                ids.addAll(st.cases().keySet());
+                ids.addAll(project.combinations().keySet());
+            }
         }
         ids.forEach(caseCombo::add);
         caseIds = ids;
@@ -343,7 +369,7 @@ final class SectionPage {
             return;
         }
         editor.selection().pointSelected(inside(x, y)
-                ? new SectionPoint(editor.path(), stationId(), sectionId(), caseId(), p[0], p[1]) : null);
+                ? new SectionPoint(editor.path(), stationId(), sectionId(), pointCaseId(), p[0], p[1]) : null);
     }
 
     private void pointerMoved(MouseEvent e) {
@@ -357,7 +383,7 @@ final class SectionPage {
         pointerLine.setText(NLS.bind(Messages.SectionPage_pointer,
                 new Object[] { Format.number(p[0] * f), Format.number(p[1] * f), unit }));
         editor.pointer().moved(inside(e.x, e.y)
-                ? new SectionPoint(editor.path(), stationId(), sectionId(), caseId(), p[0], p[1]) : null);
+                ? new SectionPoint(editor.path(), stationId(), sectionId(), pointCaseId(), p[0], p[1]) : null);
     }
 
     /** @return the section-frame point under canvas point (x, y), or null when no section is shown */
@@ -415,7 +441,15 @@ final class SectionPage {
         return i < 0 || i >= caseIds.size() ? null : caseIds.get(i);
     }
 
-    /** Chooses a case or combination by id (no effect when not offered). */
+    /**
+     * @return the case of a published point: the chosen case or combination; null ("the governing one") while the
+     *         chooser lists load histories, which are not load cases
+     */
+    private String pointCaseId() {
+        return historiesListed ? null : caseId();
+    }
+
+    /** Chooses a case or combination (a load history for the fatigue quantity) by id (no effect when not offered). */
     void selectCase(String id) {
         if (caseIds.contains(id)) {
             caseCombo.select(caseIds.indexOf(id));
@@ -423,10 +457,15 @@ final class SectionPage {
         }
     }
 
-    /** Chooses a quantity. */
+    /** @return the ids the case chooser offers (cases and combinations, or load histories), in its order */
+    List<String> caseChoices() {
+        return caseIds;
+    }
+
+    /** Chooses a quantity (the case chooser follows: load histories for the fatigue quantity). */
     void selectQuantity(Quantity q) {
         quantityCombo.select(q.ordinal());
-        overlays.recompute();
+        refreshCasesAndContour();
     }
 
     Quantity quantity() {
