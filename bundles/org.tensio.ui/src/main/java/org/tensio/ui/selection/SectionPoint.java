@@ -21,10 +21,18 @@ import org.eclipse.core.runtime.Platform;
  * @param caseId    the load case or combination, or {@code null} for "the governing one"
  * @param x         x, model length units
  * @param y         y, model length units
+ * @param historyId the load history of the station's fatigue check the point stands for (a fatigue result, or the
+ *                  editor showing a fatigue quantity), or {@code null}; independent of {@code caseId} (a history is
+ *                  not a load case: the two may even share an id)
  * @since 0.1
  */
-public record SectionPoint(Path project, String stationId, String sectionId, String caseId, double x, double y)
-        implements IAdaptable {
+public record SectionPoint(Path project, String stationId, String sectionId, String caseId, double x, double y,
+        String historyId) implements IAdaptable {
+
+    /** A point without a load history. */
+    public SectionPoint(Path project, String stationId, String sectionId, String caseId, double x, double y) {
+        this(project, stationId, sectionId, caseId, x, y, null);
+    }
 
     /** Checks the file, the section id and that the coordinates are finite. */
     public SectionPoint {
@@ -35,9 +43,14 @@ public record SectionPoint(Path project, String stationId, String sectionId, Str
         }
     }
 
-    /** @return the same point for another load case or combination */
+    /** @return the same point for another load case or combination (the load history kept) */
     public SectionPoint withCase(String newCaseId) {
-        return new SectionPoint(project, stationId, sectionId, newCaseId, x, y);
+        return new SectionPoint(project, stationId, sectionId, newCaseId, x, y, historyId);
+    }
+
+    /** @return the same point for another load history of the station's fatigue check, or none (null) */
+    public SectionPoint withHistory(String newHistoryId) {
+        return new SectionPoint(project, stationId, sectionId, caseId, x, y, newHistoryId);
     }
 
     /** @return this when it is an instance of {@code adapter}, else what the platform's adapter factories give */

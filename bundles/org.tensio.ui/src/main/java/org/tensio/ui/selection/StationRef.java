@@ -14,9 +14,16 @@ import org.eclipse.core.runtime.Platform;
  * @param project   the project file (absolute, normalised)
  * @param stationId the station id
  * @param caseId    the load case or combination, or {@code null}
+ * @param historyId the load history of the station's fatigue check (a fatigue history node), or {@code null};
+ *                  independent of {@code caseId}
  * @since 0.1
  */
-public record StationRef(Path project, String stationId, String caseId) implements IAdaptable {
+public record StationRef(Path project, String stationId, String caseId, String historyId) implements IAdaptable {
+
+    /** A station (and case) without a load history. */
+    public StationRef(Path project, String stationId, String caseId) {
+        this(project, stationId, caseId, null);
+    }
 
     /** Checks the file and the station id. */
     public StationRef {

@@ -79,6 +79,8 @@ final class SectionPage {
     private List<String> caseIds = List.of();
     /** whether the case chooser lists the load histories of the station's fatigue check (fatigue quantity) */
     private boolean historiesListed;
+    /** The quantity shown before another view's selection switched to the fatigue quantity, or null. */
+    private Quantity staticQuantity;
     /** the choice of the other kind (case while histories are listed, history otherwise), restored on return */
     private String otherKindChoice;
 
@@ -317,6 +319,28 @@ final class SectionPage {
         }
     }
 
+    /**
+     * Shows a station's section and case, or — for a load history of its fatigue check — the fatigue quantity for
+     * that history (from another view's selection). A case while the fatigue quantity is shown brings back the
+     * quantity shown before it (utilisation when none).
+     */
+    void showStation(String station, String caseId, String historyId) {
+        Project project = editor.project();
+        FatigueStation fs = project == null ? null : project.fatigue().stations().get(station);
+        if (historyId != null && fs != null && fs.histories().containsKey(historyId)) {
+            if (!quantity().fatigue()) {
+                staticQuantity = quantity();
+                quantityCombo.select(Quantity.FATIGUE_UTILISATION.ordinal());
+            }
+            showStation(station, historyId);
+            return;
+        }
+        if (historyId == null && caseId != null && quantity().fatigue()) {
+            quantityCombo.select((staticQuantity != null ? staticQuantity : Quantity.UTILISATION).ordinal());
+        }
+        showStation(station, caseId);
+    }
+
     /** Shows a station's section and case (from another view's selection). */
     void showStation(String station, String caseId) {
         var st = editor.model().stations().stream().filter(s -> s.id().equals(station)).findFirst().orElse(null);
@@ -369,7 +393,8 @@ final class SectionPage {
             return;
         }
         editor.selection().pointSelected(inside(x, y)
-                ? new SectionPoint(editor.path(), stationId(), sectionId(), pointCaseId(), p[0], p[1]) : null);
+                ? new SectionPoint(editor.path(), stationId(), sectionId(), pointCaseId(), p[0], p[1],
+                        pointHistoryId()) : null);
     }
 
     private void pointerMoved(MouseEvent e) {
@@ -383,7 +408,8 @@ final class SectionPage {
         pointerLine.setText(NLS.bind(Messages.SectionPage_pointer,
                 new Object[] { Format.number(p[0] * f), Format.number(p[1] * f), unit }));
         editor.pointer().moved(inside(e.x, e.y)
-                ? new SectionPoint(editor.path(), stationId(), sectionId(), pointCaseId(), p[0], p[1]) : null);
+                ? new SectionPoint(editor.path(), stationId(), sectionId(), pointCaseId(), p[0], p[1],
+                        pointHistoryId()) : null);
     }
 
     /** @return the section-frame point under canvas point (x, y), or null when no section is shown */
@@ -447,6 +473,11 @@ final class SectionPage {
      */
     private String pointCaseId() {
         return historiesListed ? null : caseId();
+    }
+
+    /** @return the load history of a published point: the chosen one while the fatigue quantity is shown */
+    private String pointHistoryId() {
+        return historiesListed ? caseId() : null;
     }
 
     /** Chooses a case or combination (a load history for the fatigue quantity) by id (no effect when not offered). */

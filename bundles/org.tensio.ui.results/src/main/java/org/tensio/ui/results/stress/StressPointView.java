@@ -244,9 +244,11 @@ public final class StressPointView extends ViewPart {
                 report = r;
                 tables.show(r);
                 String[] pick = point.equals(pickedFor) ? picked : null;
-                if (pick == null && point.caseId() != null && point.stationId() != null
+                if (pick == null && point.historyId() != null) {
+                    pick = new String[] { point.historyId(), null }; // the point's load history: its governing row
+                } else if (pick == null && point.caseId() != null && point.stationId() != null
                         && PointEvaluator.isHistoryOnly(p, p.project().station(point.stationId()), point.caseId())) {
-                    pick = new String[] { point.caseId(), null }; // a history as the case: its governing row
+                    pick = new String[] { point.caseId(), null }; // a history given as the case
                 }
                 showFatigue(fatigue.show(r, pick));
                 updateHeader();

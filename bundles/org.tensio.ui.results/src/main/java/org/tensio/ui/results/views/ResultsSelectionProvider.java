@@ -22,8 +22,8 @@ import org.tensio.ui.selection.StationRef;
 /**
  * The results view's selection as the workbench sees it: the contract values of {@code org.tensio.ui.selection},
  * not tree nodes. A station or case node becomes a {@link StationRef}; a criterion or point node a
- * {@link SectionPoint} at its governing point (with its station, section and case — no case for a fatigue result,
- * whose case is a load history); the project node nothing.
+ * {@link SectionPoint} at its governing point (with its station, section and case); the project node nothing. For
+ * fatigue results the tree's "case" is a load history: it goes into {@code historyId}, the case stays null.
  * Setting a selection of such values selects the matching nodes.
  */
 final class ResultsSelectionProvider implements ISelectionProvider {
@@ -82,26 +82,38 @@ final class ResultsSelectionProvider implements ISelectionProvider {
             case STATION:
                 return new StationRef(file, node.stationId(), null);
             case CASE:
-                return new StationRef(file, node.stationId(), node.caseId());
+                return fatigue(node) ? new StationRef(file, node.stationId(), null, node.caseId())
+                        : new StationRef(file, node.stationId(), node.caseId());
             case CRITERION, POINT:
                 CheckResult r = node.governing();
-                // a fatigue result's "case" is its load history, not a load case: let the point's reader choose
-                return r == null ? null
-                        : new SectionPoint(file, node.stationId(), node.sectionId(),
-                                r.fatigue() != null ? null : node.caseId(), r.point().x(), r.point().y());
+                if (r == null) {
+                    return null;
+                }
+                return fatigue(node)
+                        ? new SectionPoint(file, node.stationId(), node.sectionId(), null, r.point().x(), r.point().y(),
+                                node.caseId())
+                        : new SectionPoint(file, node.stationId(), node.sectionId(), node.caseId(), r.point().x(),
+                                r.point().y());
             default:
                 return null;
         }
     }
 
+    /** @return true when the node's results are fatigue results (its case is a load history) */
+    private static boolean fatigue(ResultNode node) {
+        return node.governing() != null && node.governing().isFatigue();
+    }
+
     private static void collect(ResultNode n, Object value, List<ResultNode> out) {
         boolean match = false;
         if (value instanceof StationRef ref) {
-            match = ref.stationId().equals(n.stationId()) && (ref.caseId() == null
-                    ? n.kind() == NodeKind.STATION : n.kind() == NodeKind.CASE && ref.caseId().equals(n.caseId()));
+            String c = ref.historyId() != null ? ref.historyId() : ref.caseId();
+            match = ref.stationId().equals(n.stationId()) && (c == null ? n.kind() == NodeKind.STATION
+                    : n.kind() == NodeKind.CASE && c.equals(n.caseId()) && (ref.historyId() != null) == fatigue(n));
         } else if (value instanceof SectionPoint p && n.kind() == NodeKind.POINT && n.governing() != null) {
-            match = p.stationId() != null && p.stationId().equals(n.stationId()) && p.caseId() != null
-                    && p.caseId().equals(n.caseId()) && p.x() == n.governing().point().x()
+            String c = p.historyId() != null ? p.historyId() : p.caseId();
+            match = p.stationId() != null && p.stationId().equals(n.stationId()) && c != null && c.equals(n.caseId())
+                    && (p.historyId() != null) == fatigue(n) && p.x() == n.governing().point().x()
                     && p.y() == n.governing().point().y();
         }
         if (match) {

@@ -187,6 +187,20 @@ class PagesTest {
                 && "ULS".equals(editor.contour().request().caseId()));
         Screenshots.save(page.getWorkbenchWindow().getShell(), "editor-point-from-results.png",
                 EditorFixture::paintFigures);
+
+        // a load history of a fatigue check (a fatigue node of the results tree): the fatigue contour for it; a load
+        // case afterwards brings back the quantity shown before
+        org.tensio.ui.editor.overlay.Quantity before = editor.contour().request().quantity();
+        results.select(new org.tensio.ui.selection.StationRef(project, "drive_shaft_sprocket", null, "start_up"));
+        waitUntil(display, TIMEOUT, "the fatigue contour for start_up", () -> editor.contour() != null
+                && !editor.contourBusy()
+                && editor.contour().request().quantity() == org.tensio.ui.editor.overlay.Quantity.FATIGUE_UTILISATION
+                && "start_up".equals(editor.contour().request().caseId()));
+        assertEquals(List.of("running", "start_up"), editor.caseChoices());
+        results.select(new org.tensio.ui.selection.StationRef(project, "drive_shaft_sprocket", "ULS"));
+        waitUntil(display, TIMEOUT, "the static contour again", () -> editor.contour() != null
+                && !editor.contourBusy() && editor.contour().request().quantity() == before
+                && "ULS".equals(editor.contour().request().caseId()));
     }
 
     @Test

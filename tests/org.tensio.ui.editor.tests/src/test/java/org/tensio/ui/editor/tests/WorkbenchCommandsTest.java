@@ -145,5 +145,15 @@ class WorkbenchCommandsTest {
         editor.graphicalViewer().getControl().notifyListeners(SWT.MouseMove, outside);
         assertEquals(2, seen.size());
         assertNull(seen.get(1), "off the section: null");
+
+        // with the fatigue quantity the point carries the chosen load history and no load case
+        editor.showStation("drive_shaft_sprocket", "SLS");
+        editor.showQuantity(org.tensio.ui.editor.overlay.Quantity.FATIGUE_UTILISATION);
+        editor.showStation("drive_shaft_sprocket", "start_up");
+        editor.graphicalViewer().getControl().notifyListeners(SWT.MouseMove, move);
+        SectionPoint f = seen.get(seen.size() - 1);
+        assertEquals("start_up", f.historyId());
+        assertNull(f.caseId());
+        assertEquals("drive_shaft_sprocket", f.stationId());
     }
 }

@@ -74,6 +74,21 @@ class SelectionContractTest {
         assertEquals("idler_axle", p.sectionId());
         assertEquals("G", p.caseId());
         assertEquals(30.0, Math.hypot(p.x(), p.y()), 1e-9, "on the outer circle of the 60 x 5 tube (r = 30)");
+        assertEquals(null, p.historyId(), "a static result has no load history");
+
+        // fatigue results: the tree's "case" is a load history, published as historyId (the case stays null)
+        TreeItem sprocket = ResultsViewTest.find(tree.getItem(0).getItems(), "drive_shaft_sprocket");
+        TreeItem running = ResultsViewTest.find(sprocket.getItems(), "running");
+        click(tree, running);
+        assertEquals(new StationRef(demo, "drive_shaft_sprocket", null, "running"), first(wb.page.getSelection()));
+        click(tree, ResultsViewTest.find(running.getItems(), "fatigueGoodman"));
+        SectionPoint f = (SectionPoint) first(wb.page.getSelection());
+        assertEquals("running", f.historyId());
+        assertEquals(null, f.caseId());
+        assertEquals("drive_shaft", f.sectionId());
+        // a static case node of the same station keeps historyId null
+        click(tree, ResultsViewTest.find(sprocket.getItems(), "ULS"));
+        assertEquals(new StationRef(demo, "drive_shaft_sprocket", "ULS"), first(wb.page.getSelection()));
         wb.page.hideView(source);
     }
 
