@@ -191,6 +191,7 @@ class PagesTest {
         // a load history of a fatigue check (a fatigue node of the results tree): the fatigue contour for it; a load
         // case afterwards brings back the quantity shown before
         org.tensio.ui.editor.overlay.Quantity before = editor.contour().request().quantity();
+        page.activate(results); // the selection service reports the active part's selection
         results.select(new org.tensio.ui.selection.StationRef(project, "drive_shaft_sprocket", null, "start_up"));
         waitUntil(display, TIMEOUT, "the fatigue contour for start_up", () -> editor.contour() != null
                 && !editor.contourBusy()
