@@ -21,6 +21,22 @@ import org.tensio.engine.units.UnitSystem;
 /** Sections, materials and small projects for the check tests (invented scenarios; mm, N, MPa). */
 final class CheckFixtures {
 
+    /**
+     * A composite of a steel flat (with fatigue data) and a plastic strip on top (without), alternating bending:
+     * the fatigue tests' section with a material that is not checked for fatigue.
+     */
+    static final String FATIGUE_COMPOSITE = """
+            {"tensio": 1, "materials": {"st": {"E": 210000, "nu": 0.3, "fy": 355, "fu": 510},
+                                        "pl": {"E": 3000, "nu": 0.4, "fy": 40, "fu": 60}},
+             "sections": {"c": {"parts": [
+               {"material": "st", "profile": {"type": "RectangleProfile", "xDim": 40, "yDim": 10}},
+               {"material": "pl", "profile": {"type": "RectangleProfile", "xDim": 40, "yDim": 6}, "offset": [0, 8]}]}},
+             "stations": {"A": {"section": "c", "forces": {"run": {"Mx": 1e5}}}},
+             "fatigue": {"materials": {"st": {"estimate": "steel", "surface": "machined"}},
+               "stations": {"A": {"histories": {"h": {"alternating": {"Mx": 1e5}}}, "criteria": ["fatigueGoodman"]}}}}
+            """;
+
+
     /** One engine for all tests: its cache keeps each section's solution. */
     static final SectionAnalysisService ENGINE = SectionAnalysisService.create();
 

@@ -151,16 +151,7 @@ class FatiguePointOpTest {
     /** In a composite section a point of a material without fatigue data gets a note, not a number. */
     @Test
     void aMaterialWithoutFatigueDataGivesANote() throws Exception {
-        Project p = project("""
-                {"tensio": 1, "materials": {"st": {"E": 210000, "nu": 0.3, "fy": 355, "fu": 510},
-                                            "pl": {"E": 3000, "nu": 0.4, "fy": 40, "fu": 60}},
-                 "sections": {"c": {"parts": [
-                   {"material": "st", "profile": {"type": "RectangleProfile", "xDim": 40, "yDim": 10}},
-                   {"material": "pl", "profile": {"type": "RectangleProfile", "xDim": 40, "yDim": 6}, "offset": [0, 8]}]}},
-                 "stations": {"A": {"section": "c", "forces": {"run": {"Mx": 1e5}}}},
-                 "fatigue": {"materials": {"st": {"estimate": "steel", "surface": "machined"}},
-                   "stations": {"A": {"histories": {"h": {"alternating": {"Mx": 1e5}}}, "criteria": ["fatigueGoodman"]}}}}
-                """);
+        Project p = project(CheckFixtures.FATIGUE_COMPOSITE);
         FatiguePointOp op = op(p, "c");
         FatiguePointOp.Result r = op.evaluate("A", new Point2(0, 9), 0);
         assertTrue(r.results().isEmpty());

@@ -181,16 +181,7 @@ class FatigueSampleUtilisationTest {
     /** A composite section: the samples of the material without fatigue data are NaN, with a note. */
     @Test
     void samplesOfAMaterialWithoutFatigueDataAreNaN() throws Exception {
-        Project p = ProjectReader.parse("""
-                {"tensio": 1, "materials": {"st": {"E": 210000, "nu": 0.3, "fy": 355, "fu": 510},
-                                            "pl": {"E": 3000, "nu": 0.4, "fy": 40, "fu": 60}},
-                 "sections": {"c": {"parts": [
-                   {"material": "st", "profile": {"type": "RectangleProfile", "xDim": 40, "yDim": 10}},
-                   {"material": "pl", "profile": {"type": "RectangleProfile", "xDim": 40, "yDim": 6}, "offset": [0, 8]}]}},
-                 "stations": {"A": {"section": "c", "forces": {"run": {"Mx": 1e5}}}},
-                 "fatigue": {"materials": {"st": {"estimate": "steel", "surface": "machined"}},
-                   "stations": {"A": {"histories": {"h": {"alternating": {"Mx": 1e5}}}, "criteria": ["fatigueGoodman"]}}}}
-                """, "composite.tensio.json");
+        Project p = ProjectReader.parse(CheckFixtures.FATIGUE_COMPOSITE, "composite.tensio.json");
         FatigueCheckOp.SampleUtilisation s = new FatigueCheckOp(p, ENGINE).sampleUtilisation("A", "h");
         int nan = 0;
         for (int i = 0; i < s.field().size(); i++) {
