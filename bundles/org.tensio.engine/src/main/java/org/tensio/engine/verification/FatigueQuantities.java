@@ -7,6 +7,7 @@ import java.util.function.ToDoubleFunction;
 
 import org.tensio.engine.checks.CheckResult;
 import org.tensio.engine.checks.FatigueCheckOp;
+import org.tensio.engine.checks.FatiguePointOp;
 import org.tensio.engine.fatigue.FatigueConditions;
 import org.tensio.engine.fatigue.FatigueCriterion;
 import org.tensio.engine.fatigue.FatigueData;
@@ -21,6 +22,7 @@ import org.tensio.engine.fatigue.NotchLocation;
 import org.tensio.engine.fatigue.NotchSensitivity;
 import org.tensio.engine.fatigue.NotchType;
 import org.tensio.engine.fatigue.SurfaceFinish;
+import org.tensio.engine.geometry.Point2;
 import org.tensio.engine.loads.InternalForces;
 import org.tensio.engine.project.Project;
 import org.tensio.engine.project.Station;
@@ -37,9 +39,11 @@ import org.tensio.engine.units.UnitSystem;
  * <li>{@code fatigue.dmin(criterion=NAME, n=.., kf=.., kfs=.., Ma=.., Mm=.., Ta=.., Tm=.., se=.., sut=..[, sy=..])}:
  * {@link MinimumDiameter#closedForm};</li>
  * <li>{@code fatigue.n(criterion=NAME, sut=.., sy=.., [se=..] | estimate, surface=.., [reliability=..],
- * [kt=.., kts=.., q=.., qs=..] | [kf=.., kfs=..], N=.., Mx=.., My=.., T=..)}: the factor of safety of a shaft of the
- * case's section rotating under those forces, computed by {@link FatigueCheckOp} on a one-station project (the
- * general path: unit stress fields at every mesh node); a notch, when given, acts on the whole surface.</li>
+ * [kt=.., kts=.., q=.., qs=..] | [kf=.., kfs=..], N=.., Mx=.., My=.., T=..[, at=y])}: the factor of safety of a
+ * shaft of the case's section rotating under those forces, computed by {@link FatigueCheckOp} on a one-station
+ * project (the general path: unit stress fields at every mesh node); a notch, when given, acts on the whole surface.
+ * With {@code at}, the factor of safety at the point (0, at) by {@link FatiguePointOp} (surface tolerance 0)
+ * instead of the governing sample's.</li>
  * </ul>
  */
 final class FatigueQuantities {
@@ -128,6 +132,7 @@ final class FatigueQuantities {
                     a.maybe("qs"), a.maybe("kf"), a.maybe("kfs"), null, new NotchLocation.Surface()));
         }
         List<Notch> nl = notches;
+        Double at = a.has("at") ? a.num("at") : null;
         String desc = "factor of safety n by " + cr.label() + ", shaft rotating under Mx = " + Numbers.shortest(forces.mx(),
                 6) + " N·mm, My = " + Numbers.shortest(forces.my(), 6) + " N·mm, T = " + Numbers.shortest(forces.t(), 6)
                 + " N·mm (steady), through the general path";
@@ -136,12 +141,23 @@ final class FatigueQuantities {
             FatigueMaterial fm = new FatigueMaterial(m.name(), sut, sy, basis, se, null, cond, NotchSensitivity.neuber);
             FatigueStation st = new FatigueStation("station", Map.of("h", new LoadHistory("case", null, null, null, null)),
                     nl, List.of(cr), FatigueConditions.NONE, null, null);
-            Project p = new Project(UnitSystem.MM_N, Map.of(m.name(), m), Map.of("section", c.section()),
-                    Map.of("station", new Station("station", "section", Map.of("case", forces))), Map.of(), Map.of(),
+            String sid = c.section().name();
+            Project p = new Project(UnitSystem.MM_N, Map.of(m.name(), m), Map.of(sid, c.section()),
+                    Map.of("station", new Station("station", sid, Map.of("case", forces))), Map.of(), Map.of(),
                     new FatigueData(1, 1, Map.of(m.name(), fm), Map.of("station", st)));
+            if (at != null) { // at one chosen point (0, at) instead of the governing sample
+                FatiguePointOp op = new FatiguePointOp(p, c.section(), c.service().properties(c.section()),
+                        c.service().solution(c.section()));
+                return op.evaluate("station", new Point2(0, at), 0).results().get(0).fatigue().factorOfSafety();
+            }
             List<CheckResult> r = new FatigueCheckOp(p, c.service()).results(null);
             return r.get(0).fatigue().factorOfSafety();
         };
+        if (at != null) {
+            return q(desc + ", at the point (0, " + Numbers.shortest(at, 6) + ")", "1",
+                    "new FatiguePointOp(project, section, props, fe).evaluate(\"station\", (0, at), 0).results().get(0)"
+                            + ".fatigue().factorOfSafety()", eval);
+        }
         return q(desc, "1", "FatigueCheckOp(project, service).results(null).get(0).fatigue().factorOfSafety()", eval);
     }
 
