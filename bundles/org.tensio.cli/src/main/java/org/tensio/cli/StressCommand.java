@@ -62,7 +62,7 @@ final class StressCommand implements Callable<Integer> {
         PointStress s = engine.stressAt(project, station, caseId, p, shearMethod);
         String sectionId = project.station(station).sectionId();
         FatiguePointOp fatigue = null;
-        if (project.fatigue().stations().values().stream().anyMatch(f -> f.station().equals(station))) {
+        if (project.fatigue().station(station) != null) {
             Section section = project.section(sectionId);
             fatigue = new FatiguePointOp(project, section, engine.properties(section), engine.solution(section));
         }

@@ -11,12 +11,10 @@ import java.util.Set;
 import org.tensio.engine.loads.InternalForces;
 import org.tensio.engine.project.Project;
 import org.tensio.engine.project.Station;
-import org.tensio.engine.section.Criterion;
 import org.tensio.engine.section.MaterialLimits;
 import org.tensio.engine.section.Section;
 import org.tensio.engine.section.SectionPart;
 import org.tensio.engine.service.SectionAnalysisService;
-import org.tensio.engine.spi.CheckCriterion;
 import org.tensio.engine.stress.PointStressOp;
 
 /**
@@ -65,35 +63,6 @@ public final class CheckOp {
         this.project = project;
         this.engine = engine;
         this.fields = new FieldCache(engine);
-    }
-
-    /** The demand of one criterion at a point, from the point's (σz, τzx, τzy); stress unit. */
-    @FunctionalInterface
-    private interface Demand {
-        double at(double sigmaZ, double tauZX, double tauZY);
-    }
-
-    /** One criterion of a material, resolved once per station: its name, demand and capacity. */
-    private record Rule(String name, Demand demand, double capacity) {
-    }
-
-    /** @return the built-in, then the contributed criteria of {@code lim} */
-    private List<Rule> rules(MaterialLimits lim) {
-        List<Rule> rules = new ArrayList<>();
-        for (Criterion c : lim.criteria()) {
-            rules.add(new Rule(c.name(), (a, b, d) -> MaterialLimits.demand(c, a, b, d), lim.capacity(c)));
-        }
-        for (String id : lim.contributedCriteria()) {
-            CheckCriterion c = contributed(id, lim.material());
-            rules.add(new Rule(id, c::demand, c.capacity(lim)));
-        }
-        return rules;
-    }
-
-    private CheckCriterion contributed(String id, String material) {
-        return engine.extensions().criterion(id).orElseThrow(() -> new IllegalArgumentException("materials." + material
-                + ".criteria: criterion '" + id + "' is not contributed to this engine (have "
-                + engine.extensions().criteria().keySet() + ")"));
     }
 
     /** @return the checks of {@code project} (see the class comment) */
@@ -145,9 +114,9 @@ public final class CheckOp {
                 mat[i] = keys.indexOf(f.material(i));
             }
             double[] s = new double[n], tx = new double[n], ty = new double[n];
-            List<List<Rule>> byMaterial = new ArrayList<>();
+            List<List<MaterialCriteria.Rule>> byMaterial = new ArrayList<>();
             for (String m : keys) {
-                byMaterial.add(rules(checked.get(m)));
+                byMaterial.add(MaterialCriteria.of(checked.get(m), engine.extensions()));
             }
             Set<String> singularAt = new LinkedHashSet<>();
             int singularCount = 0;
@@ -159,10 +128,8 @@ public final class CheckOp {
                     warnings.addAll(f.warnings()); // the method notes concern the shear from Vx, Vy
                 }
                 for (int k = 0; k < keys.size(); k++) {
-                    MaterialLimits lim = checked.get(keys.get(k));
-                    List<Rule> rules = byMaterial.get(k);
-                    for (Rule rule : rules) {
-                        Demand demand = rule.demand();
+                    for (MaterialCriteria.Rule rule : byMaterial.get(k)) {
+                        MaterialCriteria.Demand demand = rule.demand();
                         double capacity = rule.capacity();
                         int best = -1;
                         double bestD = Double.NEGATIVE_INFINITY;

@@ -178,7 +178,7 @@ public final class FatigueCheckOp {
      * @since 0.1
      */
     public SampleUtilisation sampleUtilisation(String stationId, String historyId, FiniteElementSolution fe) {
-        FatigueStation fs = project.fatigue().stations().get(stationId);
+        FatigueStation fs = project.fatigue().station(stationId);
         if (fs == null) {
             throw new IllegalArgumentException("stationId: station '" + stationId + "' has no fatigue check (have "
                     + project.fatigue().stations().keySet() + ")");
@@ -348,25 +348,11 @@ public final class FatigueCheckOp {
         return acc == null ? NotchFactors.NONE : acc;
     }
 
-    /** @return per sample: true when its mesh node lies on the boundary (an edge used by one element only) */
+    /** @return per sample: true when its mesh node lies on the boundary ({@link Mesh#boundaryEdges()}) */
     static boolean[] surfaceSamples(UnitStressField f, Mesh mesh) {
-        int nn = mesh.nodeCount();
-        int[] uses = new int[nn];
-        for (int e = 0; e < mesh.elementCount(); e++) {
-            for (int k = 3; k < 6; k++) {
-                uses[mesh.node(e, k)]++;
-            }
-        }
-        boolean[] boundary = new boolean[nn];
-        for (int e = 0; e < mesh.elementCount(); e++) {
-            for (int k = 3; k < 6; k++) {
-                int mid = mesh.node(e, k);
-                if (uses[mid] == 1) {
-                    boundary[mid] = true;
-                    boundary[mesh.node(e, k - 3)] = true;
-                    boundary[mesh.node(e, (k - 2) % 3)] = true;
-                }
-            }
+        boolean[] boundary = new boolean[mesh.nodeCount()];
+        for (int node : mesh.boundaryEdges()) {
+            boundary[node] = true;
         }
         boolean[] out = new boolean[f.size()];
         for (int i = 0; i < f.size(); i++) {

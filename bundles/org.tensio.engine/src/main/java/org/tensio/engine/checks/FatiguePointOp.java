@@ -122,12 +122,7 @@ public final class FatiguePointOp {
 
     /** @return the fatigue station of {@code stationId}, or null when the station has no fatigue check */
     public FatigueStation station(String stationId) {
-        for (FatigueStation fs : project.fatigue().stations().values()) {
-            if (fs.station().equals(stationId)) {
-                return fs;
-            }
-        }
-        return null;
+        return project.fatigue().station(stationId);
     }
 
     /**
@@ -198,28 +193,19 @@ public final class FatiguePointOp {
         return Math.hypot(px - (x0 + t * dx), py - (y0 + t * dy));
     }
 
-    /** The boundary edges of {@code m} (edges used by one element) as two straight halves each. */
+    /** The boundary edges of {@code m} ({@link Mesh#boundaryEdges()}) as two straight halves each. */
     private static double[] boundary(Mesh m) {
-        int[] uses = new int[m.nodeCount()];
-        for (int e = 0; e < m.elementCount(); e++) {
-            for (int k = 3; k < 6; k++) {
-                uses[m.node(e, k)]++;
+        int[] edges = m.boundaryEdges();
+        double[] out = new double[4 * 2 * (edges.length / 3)];
+        int n = 0;
+        for (int i = 0; i < edges.length; i += 3) {
+            for (int h = 0; h < 2; h++) {
+                int from = edges[i + h], to = edges[i + h + 1];
+                out[n++] = m.x(from);
+                out[n++] = m.y(from);
+                out[n++] = m.x(to);
+                out[n++] = m.y(to);
             }
-        }
-        List<double[]> segs = new ArrayList<>();
-        for (int e = 0; e < m.elementCount(); e++) {
-            for (int k = 3; k < 6; k++) {
-                int mid = m.node(e, k);
-                if (uses[mid] == 1) {
-                    int a = m.node(e, k - 3), b = m.node(e, (k - 2) % 3);
-                    segs.add(new double[] {m.x(a), m.y(a), m.x(mid), m.y(mid)});
-                    segs.add(new double[] {m.x(mid), m.y(mid), m.x(b), m.y(b)});
-                }
-            }
-        }
-        double[] out = new double[4 * segs.size()];
-        for (int i = 0; i < segs.size(); i++) {
-            System.arraycopy(segs.get(i), 0, out, 4 * i, 4);
         }
         return out;
     }

@@ -30,6 +30,15 @@ public record FatigueData(double mpaPerStressUnit, double mmPerLengthUnit, Map<S
         stations = Collections.unmodifiableMap(new LinkedHashMap<>(stations));
     }
 
+    /**
+     * @param stationId a station id
+     * @return the fatigue check of that station, or null when it has none
+     * @since 0.1
+     */
+    public FatigueStation station(String stationId) {
+        return stations.get(stationId);
+    }
+
     /** @return true when there is no fatigue station */
     public boolean isEmpty() {
         return stations.isEmpty();

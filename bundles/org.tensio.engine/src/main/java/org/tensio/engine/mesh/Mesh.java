@@ -74,6 +74,38 @@ public final class Mesh {
         return minAngleDeg;
     }
 
+    /**
+     * The boundary of the mesh (outer and inner): the element edges used by one element only, as node triples
+     * (corner, mid-side node, corner) in element order.
+     *
+     * @return {a0, m0, b0, a1, m1, b1, ...}, three node indices per boundary edge (a new array)
+     * @since 0.1
+     */
+    public int[] boundaryEdges() {
+        int[] uses = new int[nodeCount()];
+        for (int e = 0; e < elementCount(); e++) {
+            for (int k = 3; k < 6; k++) {
+                uses[node(e, k)]++;
+            }
+        }
+        int[] out = new int[3 * elementCount()];
+        int n = 0;
+        for (int e = 0; e < elementCount(); e++) {
+            for (int k = 3; k < 6; k++) {
+                int mid = node(e, k);
+                if (uses[mid] == 1) {
+                    if (n + 3 > out.length) {
+                        out = java.util.Arrays.copyOf(out, 2 * out.length);
+                    }
+                    out[n++] = node(e, k - 3);
+                    out[n++] = mid;
+                    out[n++] = node(e, (k - 2) % 3);
+                }
+            }
+        }
+        return java.util.Arrays.copyOf(out, n);
+    }
+
     /** @return re-entrant corners found on the boundary (where elastic stresses are singular) */
     public List<Singularity> singularities() {
         return singularities;

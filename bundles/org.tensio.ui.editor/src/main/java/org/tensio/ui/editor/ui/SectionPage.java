@@ -273,7 +273,7 @@ final class SectionPage {
         String station = stationId();
         if (station != null && project != null && project.stations().containsKey(station)) {
             if (histories) {
-                FatigueStation fs = project.fatigue().stations().get(station);
+                FatigueStation fs = project.fatigue().station(station);
                 if (fs != null) {
                     ids.addAll(fs.histories().keySet());
                 }
@@ -326,7 +326,7 @@ final class SectionPage {
      */
     void showStation(String station, String caseId, String historyId) {
         Project project = editor.project();
-        FatigueStation fs = project == null ? null : project.fatigue().stations().get(station);
+        FatigueStation fs = project == null ? null : project.fatigue().station(station);
         if (historyId != null && fs != null && fs.histories().containsKey(historyId)) {
             if (!quantity().fatigue()) {
                 staticQuantity = quantity();

@@ -59,11 +59,11 @@ final class FatigueTable {
 
     /**
      * @param r      the report, or null
-     * @param picked {history, criterion} of the row to select ({history, null}: that history's governing row), or
-     *               null for the governing row
+     * @param picked the row to select (without a criterion: that history's governing row), or null for the
+     *               governing row
      * @return true when something is shown (the view lays the two widgets out only then)
      */
-    boolean show(PointReport r, String[] picked) {
+    boolean show(PointReport r, FatigueRow picked) {
         if (r == null || r.fatigue() == null && r.fatigueProblem() == null) {
             table.removeAll();
             summary.setText(""); //$NON-NLS-1$
@@ -91,19 +91,19 @@ final class FatigueTable {
                 + Messages.FatigueTable_caution);
         List<String[]> texts = new ArrayList<>();
         CheckResult governing = f.governing();
-        if (picked != null && picked[1] == null) {
+        if (picked != null && picked.criterion() == null) {
             CheckResult best = null;
             for (CheckResult c : rows) {
-                if (c.caseId().equals(picked[0]) && (best == null || c.utilisation() > best.utilisation())) {
+                if (c.caseId().equals(picked.history()) && (best == null || c.utilisation() > best.utilisation())) {
                     best = c;
                 }
             }
-            picked = best == null ? null : new String[] { best.caseId(), best.criterion() };
+            picked = best == null ? null : new FatigueRow(best.caseId(), best.criterion());
         }
         int selected = -1;
         for (CheckResult c : rows) {
             FatigueDetail d = c.fatigue();
-            if (picked != null ? c.caseId().equals(picked[0]) && c.criterion().equals(picked[1])
+            if (picked != null ? c.caseId().equals(picked.history()) && c.criterion().equals(picked.criterion())
                     : c == governing) {
                 selected = texts.size();
             }

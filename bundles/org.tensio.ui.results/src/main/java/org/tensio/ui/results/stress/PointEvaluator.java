@@ -6,11 +6,11 @@ import java.util.List;
 import java.util.Map;
 
 import org.tensio.engine.checks.LoadCases;
+import org.tensio.engine.checks.MaterialCriteria;
 import org.tensio.engine.geometry.Point2;
 import org.tensio.engine.loads.InternalForces;
 import org.tensio.engine.project.Project;
 import org.tensio.engine.project.Station;
-import org.tensio.engine.section.Criterion;
 import org.tensio.engine.section.MaterialLimits;
 import org.tensio.engine.stress.PointStress;
 import org.tensio.engine.stress.PointStressOp;
@@ -93,8 +93,7 @@ public final class PointEvaluator {
 
     private static PointReport fatigue(PreparedSection p, String stationId, Point2 at, PointReport r) {
         if (p.fatigue() == null) {
-            boolean wanted = p.project().fatigue().stations().values().stream()
-                    .anyMatch(fs -> fs.station().equals(stationId));
+            boolean wanted = p.project().fatigue().station(stationId) != null;
             return wanted ? r.withFatigue(null, Messages.PointEvaluator_fatigueNoSolution) : r;
         }
         if (p.fatigue().station(stationId) == null) {
@@ -125,12 +124,8 @@ public final class PointEvaluator {
         MaterialLimits limits = p.project().limits().get(s.material());
         if (limits != null && s.total() != null) {
             double sz = s.total().sigmaZ(), tx = s.total().tauZX(), ty = s.total().tauZY();
-            for (Criterion c : limits.criteria()) {
-                u.put(c.name(), MaterialLimits.demand(c, sz, tx, ty) / limits.capacity(c));
-            }
-            for (String id : limits.contributedCriteria()) {
-                // the project was read with these contributions, so each is there; a missing one is skipped
-                p.extensions().criterion(id).ifPresent(c -> u.put(id, c.demand(sz, tx, ty) / c.capacity(limits)));
+            for (MaterialCriteria.Rule rule : MaterialCriteria.of(limits, p.extensions())) {
+                u.put(rule.name(), rule.utilisation(sz, tx, ty));
             }
             for (Map.Entry<String, Double> e : u.entrySet()) {
                 if (governing == null || e.getValue() > u.get(governing)) {

@@ -98,7 +98,7 @@ public final class StressPointView extends ViewPart {
     private boolean pinned;
     private SectionPoint current;
     /** The fatigue result clicked in the results tree ({history, criterion}), or null: its row is selected. */
-    private String[] picked;
+    private FatigueRow picked;
     /** The point {@link #picked} was clicked for (it applies to that point only). */
     private SectionPoint pickedFor;
     private PointReport report;
@@ -243,12 +243,12 @@ public final class StressPointView extends ViewPart {
             } else {
                 report = r;
                 tables.show(r);
-                String[] pick = point.equals(pickedFor) ? picked : null;
+                FatigueRow pick = point.equals(pickedFor) ? picked : null;
                 if (pick == null && point.historyId() != null) {
-                    pick = new String[] { point.historyId(), null }; // the point's load history: its governing row
+                    pick = new FatigueRow(point.historyId(), null); // the point's load history: its governing row
                 } else if (pick == null && point.caseId() != null && point.stationId() != null
                         && PointEvaluator.isHistoryOnly(p, p.project().station(point.stationId()), point.caseId())) {
-                    pick = new String[] { point.caseId(), null }; // a history given as the case
+                    pick = new FatigueRow(point.caseId(), null); // a history given as the case
                 }
                 showFatigue(fatigue.show(r, pick));
                 updateHeader();
@@ -336,14 +336,14 @@ public final class StressPointView extends ViewPart {
     }
 
     /**
-     * @return {history, criterion} of the fatigue result selected in {@code part} when it is the results view
-     *         (the selection contract carries no load history), else null
+     * @return the history and criterion of the fatigue result selected in {@code part} when it is the results view
+     *         (the selection contract carries the history but not the criterion), else null
      */
-    private static String[] pickedFatigue(IWorkbenchPart part) {
+    private static FatigueRow pickedFatigue(IWorkbenchPart part) {
         if (part instanceof ResultsView results && results.selectedNodes().size() == 1) {
             CheckResult r = results.selectedNodes().get(0).governing();
             if (r != null && r.isFatigue()) {
-                return new String[] { r.caseId(), r.criterion() };
+                return new FatigueRow(r.caseId(), r.criterion());
             }
         }
         return null;
